@@ -1,0 +1,11 @@
+import { db } from "./db";
+import { AppError } from "./errors";
+
+export async function checkHealth(): Promise<{ ok: true }> {
+  try {
+    await db().raw("select 1");
+  } catch (err) {
+    throw new AppError("unavailable", "The database is not answering.", { cause: err });
+  }
+  return { ok: true };
+}

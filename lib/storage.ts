@@ -1,0 +1,56 @@
+import { createHash } from "node:crypto";
+import type { Readable } from "node:stream";
+import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
+import { env } from "./env";
+
+const holder = globalThis as unknown as { __wickmarkS3?: S3Client };
+
+/** The S3 API client. Path-style and checksums only when required, so any S3 API (AWS, MinIO, s3rver) works. */
+export function s3(): S3Client {
+  if (!holder.__wickmarkS3) {
+    const e = env();
+    holder.__wickmarkS3 = new S3Client({
+      region: e.S3_REGION,
+      endpoint: e.S3_ENDPOINT,
+      forcePathStyle: e.S3_FORCE_PATH_STYLE,
+      credentials: { accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY },
+      requestChecksumCalculation: "WHEN_REQUIRED",
+      responseChecksumValidation: "WHEN_REQUIRED",
+    });
+  }
+  return holder.__wickmarkS3;
+}
+
+const bucket = () => env().S3_BUCKET;
+
+export async function putObject(key: string, body: Buffer | Uint8Array | string, contentType = "application/octet-stream"): Promise<void> {
+  await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType }));
+}
+
+export async function headObject(key: string): Promise<{ size: number; contentType?: string; etag?: string }> {
+  const r = await s3().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+  return { size: Number(r.ContentLength ?? 0), contentType: r.ContentType, etag: r.ETag };
+}
+
+/** Streams an object (or a byte range of it) without holding it in memory. */
+export async function getObjectStream(key: string, range?: { start: number; end?: number }): Promise<Readable> {
+  const Range = range ? `bytes=${range.start}-${range.end ?? ""}` : undefined;
+  const r = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key, Range }));
+  return r.Body as Readable;
+}
+
+export async function presignGet(key: string, expiresInSeconds = 900): Promise<string> {
+  return getSignedUrl(s3(), new GetObjectCommand({ Bucket: bucket(), Key: key }), { expiresIn: expiresInSeconds });
+}
+
+export async function presignPut(key: string, contentType: string, expiresInSeconds = 900): Promise<string> {
+  return getSignedUrl(s3(), new PutObjectCommand({ Bucket: bucket(), Key: key, ContentType: contentType }), { expiresIn: expiresInSeconds });
+}
+
+/** SHA-256 of a stream, hex. */
+export async function sha256OfStream(stream: Readable): Promise<string> {
+  const hash = createHash("sha256");
+  for await (const chunk of stream) hash.update(chunk as Buffer);
+  return hash.digest("hex");
+}

@@ -1,0 +1,29 @@
+#!/usr/bin/env bash
+# Installs whatever a fresh Debian machine with only Node.js and npm lacks, then runs
+# scripts/<command>.ts. Used by `npm start`, `npm test` and `npm run dev`.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+cmd="${1:?usage: bootstrap.sh start|test|dev}"
+shift
+
+need=()
+ls /usr/lib/postgresql/*/bin/postgres >/dev/null 2>&1 || need+=(postgresql)
+command -v ffmpeg >/dev/null 2>&1 && command -v ffprobe >/dev/null 2>&1 || need+=(ffmpeg)
+command -v setpriv >/dev/null 2>&1 || need+=(util-linux)
+if [ "$cmd" = test ] && ! [ -x /usr/bin/chromium ]; then need+=(chromium); fi
+if [ ${#need[@]} -gt 0 ]; then
+  echo "[wickmark] installing Debian packages: ${need[*]}"
+  if [ "$(id -u)" -ne 0 ]; then sudo="sudo"; else sudo=""; fi
+  $sudo apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -qq --no-install-recommends "${need[@]}" >/dev/null
+fi
+
+# npm ci when node_modules is missing or older than the lockfile.
+if ! [ -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+  echo "[wickmark] installing npm packages (npm ci)"
+  npm ci --no-audit --no-fund
+fi
+
+# `dev` is `start` with next dev and hot reload.
+if [ "$cmd" = dev ]; then cmd=start; set -- --dev "$@"; fi
+exec node --import ./node_modules/tsx/dist/loader.mjs "scripts/$cmd.ts" "$@"

@@ -1,0 +1,47 @@
+import os from "node:os";
+import path from "node:path";
+import { projectRoot } from "./services/service";
+
+// The two local set-ups: `npm start`/`npm run dev` keep their data; `npm test` starts afresh on
+// other ports and another bucket, so both can run on one machine at once.
+export interface Profile {
+  name: "dev" | "test";
+  dataDir: string;
+  /** Where PostgreSQL keeps its files when the project folder is not traversable by nobody. */
+  pgFallbackDir: string;
+  ports: { app: number; pg: number; s3: number; smtp: number; mailApi: number };
+  bucket: string;
+  database: string;
+  fast: boolean;
+  distDir: string;
+  bcryptRounds: number;
+}
+
+const dataRoot = path.join(projectRoot, ".data");
+const tmpKey = Buffer.from(projectRoot).toString("base64url").slice(-12);
+
+export const PROFILES: Record<Profile["name"], Profile> = {
+  dev: {
+    name: "dev",
+    dataDir: path.join(dataRoot, "dev"),
+    pgFallbackDir: path.join(os.tmpdir(), `wickmark-${tmpKey}`, "dev-pg"),
+    ports: { app: 3000, pg: 54329, s3: 4569, smtp: 2525, mailApi: 2580 },
+    bucket: "wickmark",
+    database: "wickmark",
+    fast: false,
+    distDir: ".next",
+    bcryptRounds: 12,
+  },
+  test: {
+    name: "test",
+    dataDir: path.join(dataRoot, "test"),
+    pgFallbackDir: path.join(os.tmpdir(), `wickmark-${tmpKey}`, "test-pg"),
+    ports: { app: 3100, pg: 54339, s3: 4579, smtp: 2535, mailApi: 2590 },
+    bucket: "wickmark-test",
+    database: "wickmark_test",
+    fast: true,
+    distDir: ".next-test",
+    // Fewer rounds keep the many sign-ins of the suite quick; production keeps the default.
+    bcryptRounds: 10,
+  },
+};

@@ -1,0 +1,37 @@
+import { randomBytes } from "node:crypto";
+import { hashPassword } from "@/lib/auth/password";
+import { db } from "@/lib/db";
+import { listOrganisations } from "@/lib/organisations/queries";
+import { insertUser } from "@/lib/users/queries";
+import type { Role } from "@/lib/users/rules";
+import { DEMO_PASSWORD, DEMO_USERS } from "@/seeds/demo";
+
+export const PASSWORD = "correct horse battery";
+
+export const demo = {
+  password: DEMO_PASSWORD,
+  email: (role: "technician" | "reviewer" | "lead" | "manufacturer") => DEMO_USERS.find((u) => u.roles[0] === role)!.email,
+};
+
+export const uniqueEmail = (tag: string) => `${tag}-${randomBytes(4).toString("hex")}@example.test`;
+
+/** A ready account, created through the data layer (the invite flow has its own test). */
+export async function makeUser(
+  roles: Role[],
+  opts: { organisationId?: string; password?: string; invited?: boolean } = {},
+): Promise<{ id: string; email: string; password: string }> {
+  const email = uniqueEmail(roles.join("-"));
+  const password = opts.password ?? PASSWORD;
+  const id = await insertUser(db(), {
+    email,
+    name: `Test ${roles.join(" ")}`,
+    roles,
+    organisationId: opts.organisationId ?? null,
+    passwordHash: opts.invited ? null : await hashPassword(password),
+  });
+  return { id, email, password };
+}
+
+export async function demoOrganisationId(): Promise<string> {
+  return (await listOrganisations(db()))[0].id;
+}

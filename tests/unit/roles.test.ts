@@ -1,0 +1,47 @@
+import { describe, expect, it } from "vitest";
+import { navFor } from "@/components/shell/nav-items";
+import { roleSetProblem, selfChangeProblem, statusOf } from "@/lib/users/rules";
+
+const ORG = "6f1c1a36-5d0e-4a57-9a55-1f6f1a4a2b11";
+
+describe("roleSetProblem", () => {
+  it("accepts lab roles in any combination without an organisation", () => {
+    expect(roleSetProblem(["technician", "reviewer", "lead"], null)).toBeNull();
+  });
+  it("accepts a manufacturer with an organisation", () => {
+    expect(roleSetProblem(["manufacturer"], ORG)).toBeNull();
+  });
+  it("refuses an empty role set, a mixed manufacturer, and a manufacturer without organisation", () => {
+    expect(roleSetProblem([], null)).toMatch(/at least one role/);
+    expect(roleSetProblem(["manufacturer", "reviewer"], ORG)).toMatch(/cannot also hold a lab role/);
+    expect(roleSetProblem(["manufacturer"], null)).toMatch(/must belong to an organisation/);
+    expect(roleSetProblem(["technician"], ORG)).toMatch(/Only manufacturer accounts/);
+  });
+});
+
+describe("selfChangeProblem", () => {
+  it("stops a lead from deactivating themselves or dropping their own lead role", () => {
+    expect(selfChangeProblem("a", "a", { active: false })).toMatch(/cannot deactivate your own/);
+    expect(selfChangeProblem("a", "a", { roles: ["reviewer"] })).toMatch(/cannot remove your own lead role/);
+    expect(selfChangeProblem("a", "a", { roles: ["lead", "reviewer"] })).toBeNull();
+    expect(selfChangeProblem("a", "b", { active: false })).toBeNull();
+  });
+});
+
+describe("statusOf", () => {
+  it("is invited until a password is set, deactivated whenever inactive", () => {
+    expect(statusOf({ active: true, hasPassword: false })).toBe("invited");
+    expect(statusOf({ active: true, hasPassword: true })).toBe("active");
+    expect(statusOf({ active: false, hasPassword: true })).toBe("deactivated");
+  });
+});
+
+describe("navFor", () => {
+  it("shows user management only to leads and the outbox only with dev tools", () => {
+    const labels = (roles: Parameters<typeof navFor>[0], dev = true) => navFor(roles, dev).map((i) => i.label);
+    expect(labels(["technician"])).toEqual(["Overview", "Help"]);
+    expect(labels(["lead"])).toEqual(["Overview", "Users", "Outbox", "Help"]);
+    expect(labels(["lead"], false)).toEqual(["Overview", "Users", "Help"]);
+    expect(labels(["manufacturer"])).toEqual(["Our submissions", "Help"]);
+  });
+});

@@ -1,0 +1,32 @@
+import { boss, QUEUES, stopBoss } from "../lib/jobs";
+import { closeDb } from "../lib/db";
+import { handlers } from "./handlers";
+
+// The background worker: the same lib/ as the app, no Next. Several may run against one database.
+async function main() {
+  const b = await boss();
+  for (const q of Object.values(QUEUES)) {
+    const handle = handlers[q.name];
+    await b.work(q.name, { batchSize: 1 }, async (jobs) => {
+      for (const job of jobs) await handle(job.data as Record<string, unknown>);
+    });
+  }
+  console.log(`worker: consuming ${Object.keys(QUEUES).length} queue(s)`);
+
+  let stopping = false;
+  const stop = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`worker: ${signal}, finishing current jobs`);
+    await stopBoss();
+    await closeDb();
+    process.exit(0);
+  };
+  process.on("SIGTERM", () => void stop("SIGTERM"));
+  process.on("SIGINT", () => void stop("SIGINT"));
+}
+
+main().catch((err) => {
+  console.error("worker: failed to start", err);
+  process.exit(1);
+});
