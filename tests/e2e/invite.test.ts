@@ -16,11 +16,12 @@ describe("a lead invites a colleague in the browser", () => {
     await signInAs(lead, demo.email("lead"), demo.password);
     await lead.waitForURL(`${APP_URL}/overview`);
     await lead.getByRole("link", { name: "Users" }).click();
-    await lead.getByLabel("Name", { exact: true }).fill("Casey Colleague");
-    await lead.getByLabel("E-mail", { exact: true }).fill(email);
-    await lead.getByLabel("Reviewer").check();
-    await lead.getByLabel("Technician").uncheck();
-    await lead.getByRole("button", { name: "Send invitation" }).click();
+    const form = lead.getByRole("region", { name: "Invite a person" });
+    await form.getByLabel("Name").fill("Casey Colleague");
+    await form.getByLabel("E-mail").fill(email);
+    await form.getByRole("checkbox", { name: "Reviewer" }).check();
+    await form.getByRole("checkbox", { name: "Technician" }).uncheck();
+    await form.getByRole("button", { name: "Send invitation" }).click();
     await lead.getByText(`Invitation sent to ${email}.`).waitFor();
     await screenshot(lead, "invite-sent");
 

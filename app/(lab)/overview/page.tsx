@@ -14,7 +14,10 @@ export default async function OverviewPage() {
   const roles = actor.roles.filter((r) => DUTIES[r]);
   return (
     <div className="space-y-6">
-      <h1 className="text-3xl font-bold">Good to see you, {actor.name.split(" ")[0]}</h1>
+      <div>
+        <h1 className="text-3xl font-bold">Overview</h1>
+        <p className="mt-1 text-ink-600">Signed in as {actor.name}. What your roles let you do:</p>
+      </div>
       <div className="grid gap-4 md:grid-cols-3">
         {roles.map((role) => (
           <section key={role} className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">

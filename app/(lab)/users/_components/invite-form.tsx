@@ -30,8 +30,8 @@ export function InviteForm() {
   }
 
   return (
-    <section className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 className="text-lg font-semibold">Invite a person</h2>
+    <section aria-labelledby="invite-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+      <h2 id="invite-heading" className="text-lg font-semibold">Invite a person</h2>
       <form onSubmit={onSubmit} className="mt-4 grid gap-4 md:grid-cols-2" noValidate>
         <Field id="invite-name" name="name" label="Name" maxLength={120} error={err?.fields.name} required />
         <Field id="invite-email" name="email" type="email" label="E-mail" error={err?.fields.email} required />
