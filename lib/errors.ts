@@ -61,8 +61,9 @@ export function fieldErrorsOf(err: ZodError): FieldErrors {
 
 export function validationError(err: ZodError): AppError {
   const fields = fieldErrorsOf(err);
-  const list = Object.entries(fields).map(([k, v]) => (k === "_" ? v : `${k}: ${v}`));
-  return new AppError("validation", `Please correct the form: ${list.join("; ")}.`, { fields });
+  // Each message names its field in words already ("Name must be…"), so the summary just joins them.
+  const list = Object.values(fields).map((v) => (/[.!?]$/.test(v) ? v : `${v}.`));
+  return new AppError("validation", `Please correct the form. ${list.join(" ")}`, { fields });
 }
 
 /** Maps any thrown value to the single JSON error shape; unknown errors are logged, never echoed. */

@@ -2,6 +2,8 @@
 # Installs whatever a fresh Debian machine with only Node.js and npm lacks, then runs
 # scripts/<command>.ts. Used by `npm start`, `npm test` and `npm run dev`.
 set -euo pipefail
+# The AWS SDK warns at every start that its Node 20 support ends; versions are pinned (DEVELOPERS.md).
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 cd "$(dirname "$0")/.."
 cmd="${1:?usage: bootstrap.sh start|test|dev}"
 shift
@@ -26,4 +28,6 @@ fi
 
 # `dev` is `start` with next dev and hot reload.
 if [ "$cmd" = dev ]; then cmd=start; set -- --dev "$@"; fi
-exec node --import ./node_modules/tsx/dist/loader.mjs "scripts/$cmd.ts" "$@"
+# npm does not pass SIGTERM on through its shell; the parent-death signal makes sure the
+# orchestrator (and with it every service) stops when npm is stopped.
+exec setpriv --pdeathsig=TERM -- node --import ./node_modules/tsx/dist/loader.mjs "scripts/$cmd.ts" "$@"

@@ -2,6 +2,12 @@
 
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/users/rules";
 
+// A manufacturer account holds no lab role (the server refuses the mix): ticking one clears the other kind.
+function withRole(roles: Role[], role: Role): Role[] {
+  if (role === "manufacturer") return ["manufacturer"];
+  return [...roles.filter((r) => r !== "manufacturer"), role];
+}
+
 export function RoleCheckboxes({ value, onChange, idPrefix }: { value: Role[]; onChange: (roles: Role[]) => void; idPrefix: string }) {
   return (
     <fieldset className="flex flex-wrap gap-3">
@@ -12,7 +18,7 @@ export function RoleCheckboxes({ value, onChange, idPrefix }: { value: Role[]; o
             id={`${idPrefix}-${role}`}
             type="checkbox"
             checked={value.includes(role)}
-            onChange={(e) => onChange(e.target.checked ? [...value, role] : value.filter((r) => r !== role))}
+            onChange={(e) => onChange(e.target.checked ? withRole(value, role) : value.filter((r) => r !== role))}
             className="h-4 w-4 accent-wick-600"
           />
           {ROLE_LABELS[role]}
