@@ -1,5 +1,6 @@
 import bcrypt from "bcryptjs";
 import type { Knex } from "knex";
+import { seedIntake } from "./demo-intake";
 
 // The invented demo scenario: one lab's staff and one manufacturer. Idempotent: a second run keeps
 // whatever is already there (including passwords someone changed while trying the demo).
@@ -29,4 +30,5 @@ export async function seed(knex: Knex): Promise<void> {
       [u.email, u.name, [...u.roles], org?.id ?? null, hash],
     );
   }
+  await seedIntake(knex);
 }

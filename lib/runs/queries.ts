@@ -1,0 +1,105 @@
+import type { Db } from "../db";
+import type { RunValues } from "./schema";
+
+export interface RunRow {
+  id: string;
+  sampleId: string;
+  testedAt: Date;
+  technicianId: string;
+  technicianName: string;
+  roomTempC: number;
+  surfaceTempC: number;
+  prepMethod: string;
+  prepAbrasive: string;
+  prepPadPosition: string;
+  prepNotes: string;
+  roughnessRaUm: number[];
+  oilLot: string;
+  dispenserCheckValue: number | null;
+  dispenserCheckUnit: "mg" | "uL" | null;
+  cameraId: string;
+  notes: string;
+  acceptedBy: string | null;
+  acceptedByName: string | null;
+  acceptedAt: Date | null;
+  acceptReason: string | null;
+  dropCount: number;
+}
+
+export type RunColumns = Omit<RunValues, "roomTemp" | "surfaceTemp" | "dispenserCheck"> & { roomTempC: number; surfaceTempC: number; dispenserCheck: RunValues["dispenserCheck"] };
+
+function toRun(r: Record<string, any>): RunRow {
+  return {
+    id: r.id,
+    sampleId: r.sample_id,
+    testedAt: r.tested_at,
+    technicianId: r.technician_id,
+    technicianName: r.technician_name,
+    roomTempC: r.room_temp_c,
+    surfaceTempC: r.surface_temp_c,
+    prepMethod: r.prep_method,
+    prepAbrasive: r.prep_abrasive,
+    prepPadPosition: r.prep_pad_position,
+    prepNotes: r.prep_notes,
+    roughnessRaUm: r.roughness_ra_um,
+    oilLot: r.oil_lot,
+    dispenserCheckValue: r.dispenser_check_value,
+    dispenserCheckUnit: r.dispenser_check_unit,
+    cameraId: r.camera_id,
+    notes: r.notes,
+    acceptedBy: r.accepted_by,
+    acceptedByName: r.accepted_by_name,
+    acceptedAt: r.accepted_at,
+    acceptReason: r.accept_reason,
+    dropCount: Number(r.drop_count),
+  };
+}
+
+const base = (q: Db) =>
+  q("runs as r")
+    .join("users as t", "t.id", "r.technician_id")
+    .leftJoin("users as a", "a.id", "r.accepted_by")
+    .select("r.*", "t.name as technician_name", "a.name as accepted_by_name", q.raw("(select count(*) from drops d where d.run_id = r.id) as drop_count"));
+
+function columns(v: RunColumns) {
+  return {
+    tested_at: v.testedAt,
+    room_temp_c: v.roomTempC,
+    surface_temp_c: v.surfaceTempC,
+    prep_method: v.prepMethod,
+    prep_abrasive: v.prepAbrasive,
+    prep_pad_position: v.prepPadPosition,
+    prep_notes: v.prepNotes,
+    roughness_ra_um: v.roughnessRaUm,
+    oil_lot: v.oilLot,
+    dispenser_check_value: v.dispenserCheck?.value ?? null,
+    dispenser_check_unit: v.dispenserCheck?.unit ?? null,
+    camera_id: v.cameraId,
+    notes: v.notes,
+  };
+}
+
+export async function insertRun(q: Db, sampleId: string, technicianId: string, v: RunColumns, drops: number): Promise<string> {
+  const [row] = await q("runs").insert({ ...columns(v), sample_id: sampleId, technician_id: technicianId }).returning("id");
+  await q("drops").insert(Array.from({ length: drops }, (_, i) => ({ run_id: row.id, ordinal: i + 1 })));
+  return row.id;
+}
+
+/** Replaces the conditions; any earlier acceptance of flagged conditions no longer applies. */
+export async function updateRunRow(q: Db, id: string, v: RunColumns): Promise<void> {
+  await q("runs").where({ id }).update({ ...columns(v), accepted_by: null, accepted_at: null, accept_reason: null, updated_at: q.fn.now() });
+}
+
+export async function setAcceptance(q: Db, id: string, by: string, reason: string): Promise<void> {
+  await q("runs").where({ id }).update({ accepted_by: by, accepted_at: q.fn.now(), accept_reason: reason, updated_at: q.fn.now() });
+}
+
+export async function findRun(q: Db, id: string): Promise<RunRow | undefined> {
+  const r = await base(q).where("r.id", id).first();
+  return r ? toRun(r) : undefined;
+}
+
+export async function listRunsOfSubmission(q: Db, submissionId: string): Promise<RunRow[]> {
+  const rows = await base(q).join("samples as x", "x.id", "r.sample_id").where("x.submission_id", submissionId).orderBy("r.tested_at");
+  return rows.map(toRun);
+}

@@ -1,0 +1,84 @@
+import type { Actor } from "../auth/actor";
+import { recordChange } from "../audit/record";
+import { db, type Db } from "../db";
+import { findEdition } from "../editions/queries";
+import { AppError } from "../errors";
+import { findSample } from "../samples/queries";
+import { visibleSample } from "../samples/service";
+import { assertCanEditIntake, assertLead, assertVisible } from "../submissions/policy";
+import { findSubmission, updateSubmissionRow } from "../submissions/queries";
+import { toCelsius } from "../units/rules";
+import { findRun, insertRun, setAcceptance, updateRunRow, type RunColumns, type RunRow } from "./queries";
+import type { RunValues } from "./schema";
+import { toRunView, type RunView } from "./view";
+
+function toColumns(v: RunValues): RunColumns {
+  const { roomTemp, surfaceTemp, ...rest } = v;
+  return { ...rest, dispenserCheck: rest.dispenserCheck ?? null, roomTempC: toCelsius(roomTemp.value, roomTemp.unit), surfaceTempC: toCelsius(surfaceTemp.value, surfaceTemp.unit) };
+}
+
+async function viewOf(q: Db, run: RunRow): Promise<RunView & { submissionId: string; sampleSerial: string }> {
+  const sample = (await findSample(q, run.sampleId))!;
+  const submission = (await findSubmission(q, sample.submissionId))!;
+  const edition = (await findEdition(q, submission.editionId))!;
+  return { ...toRunView(run, sample, edition), submissionId: submission.id, sampleSerial: sample.serial };
+}
+
+async function visibleRun(actor: Actor, id: string, q: Db = db()): Promise<RunRow> {
+  const run = await findRun(q, id);
+  if (!run) throw new AppError("not_found", "No such run.");
+  const sample = (await findSample(q, run.sampleId))!;
+  assertVisible(actor, (await findSubmission(q, sample.submissionId))!.organisationId, "run");
+  return run;
+}
+
+/** Records one oil absorption test of a sample, with one drop per the edition's drops per ball. */
+export async function recordRun(actor: Actor, sampleId: string, v: RunValues): Promise<RunView> {
+  const sample = await visibleSample(actor, sampleId);
+  assertCanEditIntake(actor);
+  return db().transaction(async (trx) => {
+    const submission = (await findSubmission(trx, sample.submissionId))!;
+    const edition = (await findEdition(trx, submission.editionId))!;
+    const id = await insertRun(trx, sampleId, actor.id, toColumns(v), edition.dropsPerBall);
+    if (submission.status === "received") await updateSubmissionRow(trx, submission.id, { status: "testing" });
+    const view = await viewOf(trx, (await findRun(trx, id))!);
+    await recordChange(trx, actor, { action: "run.created", entity: "run", entityId: id, after: snapshot(view) });
+    return view;
+  });
+}
+
+export async function getRun(actor: Actor, id: string): Promise<RunView> {
+  return viewOf(db(), await visibleRun(actor, id));
+}
+
+export async function updateRun(actor: Actor, id: string, v: RunValues): Promise<RunView> {
+  await visibleRun(actor, id);
+  assertCanEditIntake(actor);
+  return db().transaction(async (trx) => {
+    const before = await viewOf(trx, (await findRun(trx, id))!);
+    await updateRunRow(trx, id, toColumns(v));
+    const after = await viewOf(trx, (await findRun(trx, id))!);
+    await recordChange(trx, actor, { action: "run.updated", entity: "run", entityId: id, before: snapshot(before), after: snapshot(after) });
+    return after;
+  });
+}
+
+/** A lead accepts a run whose conditions are flagged, with a written reason. */
+export async function acceptRun(actor: Actor, id: string, reason: string): Promise<RunView> {
+  await visibleRun(actor, id);
+  assertLead(actor, "accept a run with flagged conditions");
+  return db().transaction(async (trx) => {
+    const before = await viewOf(trx, (await findRun(trx, id))!);
+    if (before.flags.length === 0) throw new AppError("conflict", "This run's conditions raise no warning, so there is nothing to accept.");
+    if (before.acceptedAt) throw new AppError("conflict", `This run was already accepted by ${before.acceptedByName}.`);
+    await setAcceptance(trx, id, actor.id, reason);
+    const after = await viewOf(trx, (await findRun(trx, id))!);
+    await recordChange(trx, actor, { action: "run.accepted", entity: "run", entityId: id, before: { flags: before.flags }, after: { flags: after.flags, reason } });
+    return after;
+  });
+}
+
+function snapshot(r: RunView) {
+  const { technicianName: _t, acceptedByName: _a, dropCount: _d, roughness: _r, ...rest } = r;
+  return rest;
+}
