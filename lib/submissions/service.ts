@@ -27,6 +27,9 @@ export async function createSubmission(actor: Actor, v: SubmissionValues): Promi
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
     if (!(await findOrganisation(trx, v.organisationId))) throw new AppError("validation", "That organisation does not exist.", { fields: { organisationId: "Choose an organisation from the list." } });
+    if (v.receivedOn > new Date(Date.now() + 86_400_000).toISOString().slice(0, 10)) {
+      throw new AppError("validation", "The received date is in the future.", { fields: { receivedOn: "The received date cannot be in the future." } });
+    }
     const edition = await findEditionInForce(trx, v.receivedOn);
     if (!edition) throw new AppError("validation", `No specification edition is in force on ${v.receivedOn}. A lead must create one first.`, { fields: { receivedOn: "No edition is in force on this date." } });
     if (v.kind === "surveillance") await checkApprovalLink(trx, v);

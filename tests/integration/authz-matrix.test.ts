@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/lib/db";
 import type { Role } from "@/lib/users/rules";
 import { Client, signedIn } from "../helpers/app";
-import { demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixtures";
+import { demo, demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixtures";
+import { editionBody, goodRun, newEdition, newRun, newSample, newSubmission, today, uniqueName } from "../helpers/intake";
 import { discoverRoutes } from "../helpers/routes";
 
 // Every route handler × every role (and signed out) → the status the server must answer.
@@ -11,8 +12,8 @@ type Who = "anon" | Role;
 const WHO: Who[] = ["anon", "technician", "reviewer", "lead", "manufacturer"];
 
 interface Entry {
-  /** A concrete path; `:target` is a fresh invited user, made for each request. */
-  path: string;
+  /** A concrete path, or one built before each request (records the request may consume). */
+  path: string | (() => Promise<string>);
   body?: () => unknown;
   expect: Record<Who, number>;
 }
@@ -20,6 +21,17 @@ interface Entry {
 const everyone = (s: number): Record<Who, number> => ({ anon: s, technician: s, reviewer: s, lead: s, manufacturer: s });
 const signedInOnly = (s: number): Record<Who, number> => ({ ...everyone(s), anon: 401 });
 const leadOnly = (s: number): Record<Who, number> => ({ anon: 401, technician: 403, reviewer: 403, lead: s, manufacturer: 403 });
+const staffOnly = (s: number): Record<Who, number> => ({ anon: 401, technician: s, reviewer: s, lead: s, manufacturer: 403 });
+const intakeEditors = (s: number): Record<Who, number> => ({ anon: 401, technician: s, reviewer: 403, lead: s, manufacturer: 403 });
+
+// Records in the matrix manufacturer's own organisation, made by the demo lead.
+let lead: Client;
+let org: string;
+const invitedUser = async () => (await makeUser(["technician"], { invited: true })).id;
+const submission = async () => (await newSubmission(lead, org)).id;
+const sample = async () => (await newSample(lead, await submission())).id;
+const run = async (over = {}) => (await newRun(lead, await sample(), over)).id;
+const flaggedRun = () => run({ surfaceTemp: { value: 30, unit: "C" } });
 
 const MATRIX: Record<string, Entry> = {
   "GET /api/auth/[...nextauth]": { path: "/api/auth/session", expect: everyone(200) },
@@ -32,9 +44,39 @@ const MATRIX: Record<string, Entry> = {
     body: () => ({ email: uniqueEmail("matrix"), name: "Matrix Invitee", roles: ["technician"] }),
     expect: leadOnly(201),
   },
-  "PATCH /api/users/[id]": { path: "/api/users/:target", body: () => ({ name: "Renamed By Matrix" }), expect: leadOnly(200) },
-  "POST /api/users/[id]/invite": { path: "/api/users/:target/invite", body: () => ({}), expect: leadOnly(200) },
-  "GET /api/organisations": { path: "/api/organisations", expect: leadOnly(200) },
+  "PATCH /api/users/[id]": { path: async () => `/api/users/${await invitedUser()}`, body: () => ({ name: "Renamed By Matrix" }), expect: leadOnly(200) },
+  "POST /api/users/[id]/invite": { path: async () => `/api/users/${await invitedUser()}/invite`, body: () => ({}), expect: leadOnly(200) },
+  "GET /api/organisations": { path: "/api/organisations", expect: staffOnly(200) },
+  "POST /api/organisations": { path: "/api/organisations", body: () => ({ name: uniqueName("Matrix Org"), contactEmails: [] }), expect: leadOnly(201) },
+  "PATCH /api/organisations/[id]": { path: async () => `/api/organisations/${org}`, body: () => ({ contactEmails: ["matrix@example.test"] }), expect: leadOnly(200) },
+  "GET /api/editions": { path: "/api/editions", expect: staffOnly(200) },
+  "POST /api/editions": { path: "/api/editions", body: () => editionBody(), expect: leadOnly(201) },
+  "GET /api/editions/[id]": { path: async () => `/api/editions/${(await newEdition(lead)).id}`, expect: staffOnly(200) },
+  "PUT /api/editions/[id]": { path: async () => `/api/editions/${(await newEdition(lead)).id}`, body: () => editionBody(), expect: leadOnly(200) },
+  "GET /api/submissions": { path: "/api/submissions", expect: signedInOnly(200) },
+  "POST /api/submissions": {
+    path: "/api/submissions",
+    body: () => ({ organisationId: org, modelName: "Matrix model", kind: "research", receivedOn: today() }),
+    expect: intakeEditors(201),
+  },
+  "GET /api/submissions/[id]": { path: async () => `/api/submissions/${await submission()}`, expect: signedInOnly(200) },
+  "PATCH /api/submissions/[id]": { path: async () => `/api/submissions/${await submission()}`, body: () => ({ notes: "matrix" }), expect: intakeEditors(200) },
+  "POST /api/submissions/[id]/samples": {
+    path: async () => `/api/submissions/${await submission()}/samples`,
+    body: () => ({ serial: "M-1", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() }),
+    expect: intakeEditors(201),
+  },
+  "POST /api/submissions/[id]/samples/import": {
+    path: async () => `/api/submissions/${await submission()}/samples/import`,
+    body: () => ({ csv: "M-1,7000\nM-2,7001", unit: "g", receivedAt: new Date().toISOString() }),
+    expect: intakeEditors(201),
+  },
+  "PATCH /api/samples/[id]": { path: async () => `/api/samples/${await sample()}`, body: () => ({ notes: "matrix" }), expect: intakeEditors(200) },
+  "DELETE /api/samples/[id]": { path: async () => `/api/samples/${await sample()}`, expect: intakeEditors(200) },
+  "POST /api/samples/[id]/runs": { path: async () => `/api/samples/${await sample()}/runs`, body: () => goodRun(), expect: intakeEditors(201) },
+  "GET /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, expect: signedInOnly(200) },
+  "PUT /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, body: () => goodRun(), expect: intakeEditors(200) },
+  "POST /api/runs/[id]/acceptance": { path: async () => `/api/runs/${await flaggedRun()}/acceptance`, body: () => ({ reason: "Matrix acceptance reason." }), expect: leadOnly(200) },
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },
@@ -44,7 +86,8 @@ const clients = new Map<Who, Client>();
 
 beforeAll(async () => {
   clients.set("anon", new Client());
-  const org = await demoOrganisationId();
+  lead = await signedIn(demo.email("lead"), demo.password);
+  org = await demoOrganisationId();
   for (const who of WHO.filter((w): w is Role => w !== "anon")) {
     const u = await makeUser([who], { organisationId: who === "manufacturer" ? org : undefined });
     clients.set(who, await signedIn(u.email, u.password));
@@ -61,8 +104,7 @@ describe("authorization matrix", () => {
     const method = key.split(" ")[0];
     for (const who of WHO) {
       it(`${key} as ${who} → ${entry.expect[who]}`, async () => {
-        let path = entry.path;
-        if (path.includes(":target")) path = path.replace(":target", (await makeUser(["technician"], { invited: true })).id);
+        const path = typeof entry.path === "string" ? entry.path : await entry.path();
         // Sign-out ends the session: use a throwaway copy of the client's cookies.
         const client = key.startsWith("POST /api/auth") ? Object.assign(new Client(), { cookies: new Map(clients.get(who)!.cookies) }) : clients.get(who)!;
         const res = await client.request(method, path, entry.body ? { json: entry.body() } : {});

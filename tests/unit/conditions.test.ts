@@ -1,0 +1,61 @@
+import { describe, expect, it } from "vitest";
+import { conditionFlags, roughnessSummary } from "@/lib/runs/conditions";
+
+// Limits as an edition would give them (values invented for the test).
+const limits = { minAcclimationH: 24, surfaceTempMinC: 20, surfaceTempMaxC: 24, roughnessMaxSdUm: 0.1 };
+const start = new Date("2026-11-30T08:00:00Z");
+const hoursLater = (h: number) => new Date(start.getTime() + h * 3_600_000);
+const good = { testedAt: hoursLater(26), acclimationStartedAt: start, surfaceTempC: 22, roughnessRaUm: [0.42, 0.45, 0.44] };
+
+describe("conditionFlags", () => {
+  it("raises nothing for a run inside every limit", () => {
+    expect(conditionFlags(limits, good)).toEqual([]);
+  });
+
+  it("flags a short acclimation, in words with both numbers", () => {
+    const [flag] = conditionFlags(limits, { ...good, testedAt: hoursLater(14.5) });
+    expect(flag).toEqual({ code: "acclimation_short", message: "Acclimated for 14.5 h before the test; the edition asks for at least 24 h." });
+  });
+
+  it("flags a missing acclimation start", () => {
+    expect(conditionFlags(limits, { ...good, acclimationStartedAt: null }).map((f) => f.code)).toEqual(["acclimation_missing"]);
+  });
+
+  it("flags a surface temperature outside the window, and not on its edges", () => {
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 26.67 })[0].message).toBe(
+      "Surface temperature 26.7 °C is outside the edition's window of 20–24 °C.",
+    );
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 19.99 })).toHaveLength(1);
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 20 })).toEqual([]);
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 24 })).toEqual([]);
+  });
+
+  it("flags roughness readings that vary more than the edition allows", () => {
+    const flags = conditionFlags(limits, { ...good, roughnessRaUm: [0.2, 0.5, 0.35] });
+    expect(flags.map((f) => f.code)).toEqual(["roughness_spread"]);
+    expect(flags[0].message).toBe("Roughness readings vary by SD 0.150 µm; the edition allows at most 0.1 µm.");
+  });
+
+  it("raises every flag that applies at once", () => {
+    expect(conditionFlags(limits, { testedAt: hoursLater(2), acclimationStartedAt: start, surfaceTempC: 30, roughnessRaUm: [0.1, 0.9] }).map((f) => f.code)).toEqual([
+      "acclimation_short",
+      "surface_temp",
+      "roughness_spread",
+    ]);
+  });
+});
+
+describe("roughnessSummary", () => {
+  it("gives the mean and the sample standard deviation (n − 1)", () => {
+    // 0.2, 0.5, 0.35: mean 0.35, sample variance ((0.15)² + (0.15)² + 0)/2 = 0.0225, SD 0.15 (arithmetic).
+    const r = roughnessSummary([0.2, 0.5, 0.35]);
+    expect(r.n).toBe(3);
+    expect(r.mean).toBeCloseTo(0.35, 12);
+    expect(r.sd).toBeCloseTo(0.15, 12);
+  });
+
+  it("has no SD for fewer than two readings", () => {
+    expect(roughnessSummary([0.4])).toEqual({ n: 1, mean: 0.4, sd: null });
+    expect(roughnessSummary([])).toEqual({ n: 0, mean: null, sd: null });
+  });
+});
