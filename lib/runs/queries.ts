@@ -103,3 +103,28 @@ export async function listRunsOfSubmission(q: Db, submissionId: string): Promise
   const rows = await base(q).join("samples as x", "x.id", "r.sample_id").where("x.submission_id", submissionId).orderBy("r.tested_at");
   return rows.map(toRun);
 }
+
+export interface RunConditionsRow {
+  submissionId: string;
+  accepted: boolean;
+  input: { testedAt: Date; acclimationStartedAt: Date | null; surfaceTempC: number; roughnessRaUm: number[] };
+  limits: { minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
+}
+
+/** Just what the conditions check needs, for every run of several submissions at once (list pages). */
+export async function findRunConditions(q: Db, submissionIds: string[]): Promise<RunConditionsRow[]> {
+  if (submissionIds.length === 0) return [];
+  const rows = await q("runs as r")
+    .join("samples as x", "x.id", "r.sample_id")
+    .join("submissions as s", "s.id", "x.submission_id")
+    .join("specification_editions as e", "e.id", "s.edition_id")
+    .whereIn("s.id", submissionIds)
+    .select("s.id as submission_id", "r.accepted_at", "r.tested_at", "x.acclimation_started_at", "r.surface_temp_c", "r.roughness_ra_um",
+      "e.min_acclimation_h", "e.surface_temp_min_c", "e.surface_temp_max_c", "e.roughness_max_sd_um");
+  return rows.map((r) => ({
+    submissionId: r.submission_id,
+    accepted: r.accepted_at !== null,
+    input: { testedAt: r.tested_at, acclimationStartedAt: r.acclimation_started_at, surfaceTempC: r.surface_temp_c, roughnessRaUm: r.roughness_ra_um },
+    limits: { minAcclimationH: r.min_acclimation_h, surfaceTempMinC: r.surface_temp_min_c, surfaceTempMaxC: r.surface_temp_max_c, roughnessMaxSdUm: r.roughness_max_sd_um },
+  }));
+}

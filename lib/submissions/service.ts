@@ -4,7 +4,8 @@ import { db } from "../db";
 import { findEdition, findEditionInForce } from "../editions/queries";
 import { AppError } from "../errors";
 import { findOrganisation } from "../organisations/queries";
-import { listRunsOfSubmission } from "../runs/queries";
+import { conditionFlags } from "../runs/conditions";
+import { findRunConditions, listRunsOfSubmission } from "../runs/queries";
 import { toRunView } from "../runs/view";
 import { listSamples } from "../samples/queries";
 import { toSampleView } from "../samples/view";
@@ -48,11 +49,18 @@ async function checkApprovalLink(trx: Parameters<typeof findSubmission>[0], v: S
   if (approval.organisationId !== v.organisationId) throw new AppError("validation", "The linked approval submission belongs to another organisation.", { fields: field });
 }
 
-export async function listSubmissions(actor: Actor, f: SubmissionListQuery): Promise<{ rows: SubmissionView[]; total: number; page: number; pageSize: number }> {
+/** A page of submissions; for staff each row counts its runs with unaccepted condition warnings. */
+export async function listSubmissions(actor: Actor, f: SubmissionListQuery): Promise<{ rows: (SubmissionView & { flaggedRuns: number })[]; total: number; page: number; pageSize: number }> {
   // A manufacturer's list is its own organisation's, whatever filter it sends.
   const scope = isStaff(actor) ? {} : { organisationId: actor.organisationId ?? "00000000-0000-0000-0000-000000000000" };
   const { rows, total } = await selectSubmissions(db(), f, scope);
-  return { rows: rows.map(toSubmissionView), total, page: f.page, pageSize: f.pageSize };
+  const flagged = new Map<string, number>();
+  if (isStaff(actor)) {
+    for (const r of await findRunConditions(db(), rows.map((x) => x.id))) {
+      if (!r.accepted && conditionFlags(r.limits, r.input).length > 0) flagged.set(r.submissionId, (flagged.get(r.submissionId) ?? 0) + 1);
+    }
+  }
+  return { rows: rows.map((r) => ({ ...toSubmissionView(r), flaggedRuns: flagged.get(r.id) ?? 0 })), total, page: f.page, pageSize: f.pageSize };
 }
 
 export async function getSubmission(actor: Actor, id: string): Promise<StaffSubmissionDetail | ({ view: "manufacturer" } & ManufacturerSubmissionView)> {

@@ -90,6 +90,8 @@ describe("runs and their conditions", () => {
     expect(run.flags.map((f) => f.code)).toEqual(["acclimation_short", "surface_temp"]);
     expect(run.flags[1].message).toBe("Surface temperature 26.7 °C is outside the edition's window of 20–24 °C.");
     expect((await (await tech.get(`/api/submissions/${s.id}`)).json()).flaggedRuns).toBe(1);
+    const listedFlags = async () => (await (await tech.get(`/api/submissions?q=${s.reference}`)).json()).rows[0].flaggedRuns;
+    expect(await listedFlags()).toBe(1);
 
     expect((await tech.post(`/api/runs/${run.id}/acceptance`, { reason: "Checked by the lead." })).status).toBe(403);
     expect((await reviewer.post(`/api/runs/${run.id}/acceptance`, { reason: "Checked by the lead." })).status).toBe(403);
@@ -100,6 +102,7 @@ describe("runs and their conditions", () => {
     expect(accepted.status).toBe(200);
     expect((await accepted.json()).run).toMatchObject({ needsAcceptance: false, acceptedByName: "Demo Lead", acceptReason: "Room logger shows the ball was in the room for 30 h." });
     expect((await lead.post(`/api/runs/${run.id}/acceptance`, { reason: "Accept it a second time." })).status).toBe(409);
+    expect(await listedFlags()).toBe(0);
     const [event] = await findAuditEvents(db(), { entity: "run", entityId: run.id, action: "run.accepted" });
     expect(event.after).toMatchObject({ reason: "Room logger shows the ball was in the room for 30 h." });
 
