@@ -12,4 +12,16 @@ export function proxy(request: NextRequest) {
   return NextResponse.redirect(url);
 }
 
-export const config = { matcher: ["/overview/:path*", "/users/:path*", "/outbox/:path*", "/portal/:path*"] };
+export const config = {
+  matcher: [
+    "/overview/:path*",
+    "/submissions/:path*",
+    "/samples/:path*",
+    "/runs/:path*",
+    "/editions/:path*",
+    "/organisations/:path*",
+    "/users/:path*",
+    "/outbox/:path*",
+    "/portal/:path*",
+  ],
+};

@@ -22,6 +22,12 @@ export const envSchema = z.object({
   MAIL_FAKE_API_URL: z.string().url().optional(),
   INVITE_TTL_HOURS: z.coerce.number().positive().max(24 * 30).default(72),
   BCRYPT_ROUNDS: z.coerce.number().int().min(4).max(15).default(12),
+  CLIP_MAX_BYTES: z.coerce.number().int().positive().default(8 * 1024 ** 3),
+  CLIP_PART_SIZE_MB: z.coerce.number().int().min(5).max(512).default(16),
+  // ffprobe's format names (a file is judged by probing it, never by its extension).
+  CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts"),
+  CLIP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(2 * 3600),
+  JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(60),
 });
 
 export type Env = z.infer<typeof envSchema>;

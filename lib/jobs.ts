@@ -2,30 +2,39 @@ import PgBoss from "pg-boss";
 import { env } from "./env";
 
 /**
- * Every background queue, declared once. Payloads carry ids only; handlers live in worker/.
- * `ping` lets tests and health checks prove the worker is consuming.
+ * Every background queue, declared once. Payloads carry ids only; handlers live in worker/handlers.ts.
+ * Transient failures retry with backoff; a job whose worker died is retried once it expires.
  */
+const clipStep = <N extends string>(name: N) => ({ name, retryLimit: 3, retryDelay: 5, retryBackoff: true }) as const;
+
 export const QUEUES = {
-  ping: { name: "ping", retryLimit: 0 },
+  ping: { name: "ping", retryLimit: 0, retryDelay: 0, retryBackoff: false },
+  clipVerify: clipStep("clip-verify"),
+  clipHash: clipStep("clip-hash"),
+  clipIndex: clipStep("clip-index"),
+  clipProxy: clipStep("clip-proxy"),
+  clipThumbnails: clipStep("clip-thumbnails"),
 } as const;
 
-export type QueueName = keyof typeof QUEUES;
+export type QueueKey = keyof typeof QUEUES;
 
 const holder = globalThis as unknown as { __wickmarkBoss?: Promise<PgBoss> };
 
 /** A started pg-boss on the app database (its own `pgboss` schema), with every queue created. */
 export function boss(): Promise<PgBoss> {
   holder.__wickmarkBoss ??= (async () => {
-    const b = new PgBoss({ connectionString: env().DATABASE_URL, max: 4 });
+    const b = new PgBoss({ connectionString: env().DATABASE_URL, max: 4, maintenanceIntervalSeconds: env().JOB_MAINTENANCE_SECONDS });
     b.on("error", (err) => console.error("pg-boss error", err));
     await b.start();
-    for (const q of Object.values(QUEUES)) await b.createQueue(q.name, { name: q.name, retryLimit: q.retryLimit });
+    for (const q of Object.values(QUEUES)) {
+      await b.createQueue(q.name, { name: q.name, retryLimit: q.retryLimit, retryDelay: q.retryDelay, retryBackoff: q.retryBackoff, expireInSeconds: env().CLIP_JOB_EXPIRE_SECONDS });
+    }
     return b;
   })();
   return holder.__wickmarkBoss;
 }
 
-export async function enqueue(queue: QueueName, payload: Record<string, string | number>): Promise<string | null> {
+export async function enqueue(queue: QueueKey, payload: Record<string, string | number>): Promise<string | null> {
   return (await boss()).send(QUEUES[queue].name, payload);
 }
 

@@ -1,6 +1,16 @@
 import { createHash } from "node:crypto";
+import { createReadStream } from "node:fs";
+import { stat } from "node:fs/promises";
 import type { Readable } from "node:stream";
-import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import {
+  CompleteMultipartUploadCommand,
+  CreateMultipartUploadCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  UploadPartCommand,
+} from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "./env";
 
@@ -53,4 +63,43 @@ export async function sha256OfStream(stream: Readable): Promise<string> {
   const hash = createHash("sha256");
   for await (const chunk of stream) hash.update(chunk as Buffer);
   return hash.digest("hex");
+}
+
+// Multipart uploads straight from the browser: the server creates, signs and completes; the
+// parts never pass through the app. Parts are tracked in our database (s3rver has no ListParts).
+export async function createMultipartUpload(key: string, contentType: string): Promise<string> {
+  const r = await s3().send(new CreateMultipartUploadCommand({ Bucket: bucket(), Key: key, ContentType: contentType || "application/octet-stream" }));
+  if (!r.UploadId) throw new Error("the object store returned no UploadId");
+  return r.UploadId;
+}
+
+export async function presignUploadPart(key: string, uploadId: string, partNumber: number, expiresInSeconds = 3600): Promise<string> {
+  return getSignedUrl(s3(), new UploadPartCommand({ Bucket: bucket(), Key: key, UploadId: uploadId, PartNumber: partNumber }), { expiresIn: expiresInSeconds });
+}
+
+export async function completeMultipartUpload(key: string, uploadId: string, parts: { partNumber: number; etag: string }[]): Promise<void> {
+  await s3().send(
+    new CompleteMultipartUploadCommand({
+      Bucket: bucket(),
+      Key: key,
+      UploadId: uploadId,
+      MultipartUpload: { Parts: parts.map((p) => ({ PartNumber: p.partNumber, ETag: p.etag })) },
+    }),
+  );
+}
+
+export async function objectExists(key: string): Promise<boolean> {
+  try {
+    await headObject(key);
+    return true;
+  } catch (err) {
+    if ((err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return false;
+    throw err;
+  }
+}
+
+/** Uploads a local file by streaming it (proxies can be gigabytes). */
+export async function putObjectFile(key: string, file: string, contentType: string): Promise<void> {
+  const { size } = await stat(file);
+  await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: createReadStream(file), ContentLength: size, ContentType: contentType }));
 }

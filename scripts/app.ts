@@ -1,4 +1,4 @@
-import { spawn } from "node:child_process";
+import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
@@ -47,19 +47,32 @@ export async function startNext(env: Record<string, string>, port: number, mode:
   return { name: "app", stop };
 }
 
-/** The background worker: a separate process on the same lib/. */
+/**
+ * The background worker: a separate process on the same lib/. Like a service manager would, we
+ * start it again if it dies; jobs it held are retried by pg-boss once they expire.
+ */
 export async function startWorker(env: Record<string, string>, logFile: string): Promise<Service> {
-  const offset = logSize(logFile);
-  const child = spawnLogged("worker", process.execPath, ["--import", TSX_LOADER, path.join(projectRoot, "worker", "index.ts")], {
-    logFile,
-    env: { ...process.env, ...env },
-  });
-  const stop = () => stopChild(child, 10_000);
-  try {
+  let stopping = false;
+  let child: ChildProcess;
+  const launch = async () => {
+    const offset = logSize(logFile);
+    child = spawnLogged("worker", process.execPath, ["--import", TSX_LOADER, path.join(projectRoot, "worker", "index.ts")], { logFile, env: { ...process.env, ...env } });
+    child.once("exit", (code, signal) => {
+      if (stopping) return;
+      fs.appendFileSync(logFile, `--- worker exited (${signal ?? code}); starting it again\n`);
+      setTimeout(() => void launch().catch((e) => console.error(`[wickmark] the worker did not restart: ${e}`)), 500);
+    });
     await waitFor(async () => {
       assertAlive(child, "worker", logFile);
       return logHasSince(logFile, offset, "worker: consuming");
     }, 30_000, `the worker (log: ${logFile})`);
+  };
+  const stop = async () => {
+    stopping = true;
+    await stopChild(child, 10_000);
+  };
+  try {
+    await launch();
   } catch (e) {
     await stop();
     throw e;

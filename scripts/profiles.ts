@@ -15,6 +15,8 @@ export interface Profile {
   fast: boolean;
   distDir: string;
   bcryptRounds: number;
+  /** Settings of lib/env.ts that differ from their defaults in this profile. */
+  env: Record<string, string>;
 }
 
 const dataRoot = path.join(projectRoot, ".data");
@@ -31,6 +33,7 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     fast: false,
     distDir: ".next",
     bcryptRounds: 12,
+    env: {},
   },
   test: {
     name: "test",
@@ -43,5 +46,7 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     distDir: ".next-test",
     // Fewer rounds keep the many sign-ins of the suite quick; production keeps the default.
     bcryptRounds: 10,
+    // Small parts so a test file spans several; quick expiry so a killed worker's job returns soon.
+    env: { CLIP_PART_SIZE_MB: "5", CLIP_JOB_EXPIRE_SECONDS: "20", JOB_MAINTENANCE_SECONDS: "2" },
   },
 };

@@ -67,6 +67,8 @@ export async function startStack(p: Profile, log: (s: string) => void): Promise<
         NEXT_DIST_DIR: p.distDir,
         NEXT_TELEMETRY_DISABLED: "1",
         AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
+        WORKER_PID_FILE: path.join(p.dataDir, "worker.pid"),
+        ...p.env,
       },
     };
   } catch (err) {

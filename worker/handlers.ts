@@ -1,9 +1,23 @@
-import type { QUEUES } from "../lib/jobs";
+import { QUEUE_OF, runClipStep } from "../lib/clips/pipeline";
+import { STEPS } from "../lib/clips/rules";
+import { QUEUES } from "../lib/jobs";
 
-type Handler = (data: Record<string, unknown>) => Promise<void>;
+export interface JobInfo {
+  data: Record<string, unknown>;
+  retryCount: number;
+  retryLimit: number;
+}
+
+type Handler = (job: JobInfo) => Promise<void>;
+type QueueName = (typeof QUEUES)[keyof typeof QUEUES]["name"];
+
+const clipHandlers = Object.fromEntries(
+  STEPS.map((step) => [QUEUES[QUEUE_OF[step]].name, (job: JobInfo) => runClipStep(step, String(job.data.clipId), job)]),
+) as Record<Exclude<QueueName, "ping">, Handler>;
 
 /** One handler per queue in lib/jobs.ts; the type makes a missing one a compile error. */
-export const handlers: Record<(typeof QUEUES)[keyof typeof QUEUES]["name"], Handler> = {
+export const handlers: Record<QueueName, Handler> = {
   // Completes at once: the job's "completed" state is the proof that a worker is consuming.
   async ping() {},
+  ...clipHandlers,
 };

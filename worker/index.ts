@@ -1,3 +1,4 @@
+import { writeFileSync } from "node:fs";
 import { boss, QUEUES, stopBoss } from "../lib/jobs";
 import { closeDb } from "../lib/db";
 import { handlers } from "./handlers";
@@ -7,10 +8,12 @@ async function main() {
   const b = await boss();
   for (const q of Object.values(QUEUES)) {
     const handle = handlers[q.name];
-    await b.work(q.name, { batchSize: 1 }, async (jobs) => {
-      for (const job of jobs) await handle(job.data as Record<string, unknown>);
+    await b.work(q.name, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 1 }, async (jobs) => {
+      for (const job of jobs) await handle({ data: job.data as Record<string, unknown>, retryCount: job.retryCount, retryLimit: job.retryLimit });
     });
   }
+  // Lets a test (or an operator) find and signal this very process.
+  if (process.env.WORKER_PID_FILE) writeFileSync(process.env.WORKER_PID_FILE, String(process.pid));
   console.log(`worker: consuming ${Object.keys(QUEUES).length} queue(s)`);
 
   let stopping = false;

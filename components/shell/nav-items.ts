@@ -13,6 +13,10 @@ const STAFF: Role[] = ["technician", "reviewer", "lead"];
 // The server refuses what a role may not do; this list only decides what is worth showing.
 export const NAV_ITEMS: NavItem[] = [
   { href: "/overview", label: "Overview", roles: STAFF },
+  { href: "/submissions", label: "Submissions", roles: STAFF },
+  // Every staff member may read the editions; reviewers rarely need to, so they are not offered them here.
+  { href: "/editions", label: "Editions", roles: ["lead", "technician"] },
+  { href: "/organisations", label: "Organisations", roles: ["lead"] },
   { href: "/users", label: "Users", roles: ["lead"] },
   { href: "/outbox", label: "Outbox", roles: ["lead"], devOnly: true },
   { href: "/portal", label: "Our submissions", roles: ["manufacturer"] },

@@ -1,7 +1,8 @@
-import type { InputHTMLAttributes } from "react";
+import type { ComponentProps } from "react";
+import { describedBy, FieldMessages } from "./field-messages";
 
 /** A labelled input with its error in words, tied together for screen readers. */
-export function Field({ label, error, id, ...input }: { label: string; error?: string; id: string } & InputHTMLAttributes<HTMLInputElement>) {
+export function Field({ label, error, hint, id, ...input }: { label: string; error?: string; hint?: string; id: string } & ComponentProps<"input">) {
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-semibold text-ink-800">
@@ -10,15 +11,11 @@ export function Field({ label, error, id, ...input }: { label: string; error?: s
       <input
         id={id}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
+        aria-describedby={describedBy(id, error, hint)}
         className="block w-full rounded-md border border-ink-200 bg-white px-3 py-2 text-ink-900 shadow-sm aria-[invalid=true]:border-bad-700"
         {...input}
       />
-      {error && (
-        <p id={`${id}-error`} className="text-sm text-bad-700">
-          {error}
-        </p>
-      )}
+      <FieldMessages id={id} error={error} hint={hint} />
     </div>
   );
 }

@@ -10,9 +10,9 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 const CASES = [
-  { role: "technician", home: "/overview", nav: ["Overview", "Help"] },
-  { role: "reviewer", home: "/overview", nav: ["Overview", "Help"] },
-  { role: "lead", home: "/overview", nav: ["Overview", "Users", "Outbox", "Help"] },
+  { role: "technician", home: "/overview", nav: ["Overview", "Submissions", "Editions", "Help"] },
+  { role: "reviewer", home: "/overview", nav: ["Overview", "Submissions", "Help"] },
+  { role: "lead", home: "/overview", nav: ["Overview", "Submissions", "Editions", "Organisations", "Users", "Outbox", "Help"] },
   { role: "manufacturer", home: "/portal", nav: ["Our submissions", "Help"] },
 ] as const;
 

@@ -3,6 +3,8 @@ import { closeDb } from "@/lib/db";
 import type { Role } from "@/lib/users/rules";
 import { Client, signedIn } from "../helpers/app";
 import { demo, demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixtures";
+import { uploadFile, waitForClip } from "../helpers/clips";
+import { plainMp4 } from "../helpers/media";
 import { editionBody, goodRun, newEdition, newRun, newSample, newSubmission, today, uniqueName } from "../helpers/intake";
 import { discoverRoutes } from "../helpers/routes";
 
@@ -32,6 +34,14 @@ const submission = async () => (await newSubmission(lead, org)).id;
 const sample = async () => (await newSample(lead, await submission())).id;
 const run = async (over = {}) => (await newRun(lead, await sample(), over)).id;
 const flaggedRun = () => run({ surfaceTemp: { value: 30, unit: "C" } });
+// Clips are lab evidence: a manufacturer is told they do not exist.
+const clipReaders = (s: number): Record<Who, number> => ({ ...staffOnly(s), manufacturer: 404 });
+const clipEditors = (s: number): Record<Who, number> => ({ ...intakeEditors(s), manufacturer: 404 });
+let clipFile: string;
+let clipRun: string;
+let readyClip: string;
+const uploadingClip = async () => (await uploadFile(lead, clipRun, clipFile, { stopAfter: 0 })).clipId;
+const uploadedClip = async () => (await uploadFile(lead, clipRun, clipFile, { stopAfter: 1 })).clipId;
 
 const MATRIX: Record<string, Entry> = {
   "GET /api/auth/[...nextauth]": { path: "/api/auth/session", expect: everyone(200) },
@@ -76,6 +86,14 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/samples/[id]/runs": { path: async () => `/api/samples/${await sample()}/runs`, body: () => goodRun(), expect: intakeEditors(201) },
   "GET /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, expect: signedInOnly(200) },
   "PUT /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, body: () => goodRun(), expect: intakeEditors(200) },
+  "GET /api/runs/[id]/clips": { path: async () => `/api/runs/${clipRun}/clips`, expect: clipReaders(200) },
+  "POST /api/runs/[id]/clips": { path: async () => `/api/runs/${clipRun}/clips`, body: () => ({ fileName: "m.mp4", size: 1000, contentType: "video/mp4" }), expect: clipEditors(201) },
+  "GET /api/clips/[id]": { path: async () => `/api/clips/${readyClip}`, expect: clipReaders(200) },
+  "GET /api/clips/[id]/upload": { path: async () => `/api/clips/${await uploadingClip()}/upload`, expect: clipEditors(200) },
+  "POST /api/clips/[id]/parts/sign": { path: async () => `/api/clips/${await uploadingClip()}/parts/sign`, body: () => ({ partNumbers: [1] }), expect: clipEditors(200) },
+  "PUT /api/clips/[id]/parts/[part]": { path: async () => `/api/clips/${await uploadingClip()}/parts/1`, body: () => ({ etag: '"abc"', size: 10 }), expect: clipEditors(200) },
+  "POST /api/clips/[id]/complete": { path: async () => `/api/clips/${await uploadedClip()}/complete`, body: () => ({}), expect: clipEditors(200) },
+  "GET /api/clips/[id]/frames": { path: async () => `/api/clips/${readyClip}/frames`, expect: clipReaders(200) },
   "POST /api/runs/[id]/acceptance": { path: async () => `/api/runs/${await flaggedRun()}/acceptance`, body: () => ({ reason: "Matrix acceptance reason." }), expect: leadOnly(200) },
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
@@ -88,6 +106,9 @@ beforeAll(async () => {
   clients.set("anon", new Client());
   lead = await signedIn(demo.email("lead"), demo.password);
   org = await demoOrganisationId();
+  clipFile = plainMp4();
+  clipRun = await run();
+  readyClip = (await waitForClip(lead, (await uploadFile(lead, clipRun, clipFile)).clipId)).id;
   for (const who of WHO.filter((w): w is Role => w !== "anon")) {
     const u = await makeUser([who], { organisationId: who === "manufacturer" ? org : undefined });
     clients.set(who, await signedIn(u.email, u.password));

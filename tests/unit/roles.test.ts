@@ -39,9 +39,11 @@ describe("statusOf", () => {
 describe("navFor", () => {
   it("shows user management only to leads and the outbox only with dev tools", () => {
     const labels = (roles: Parameters<typeof navFor>[0], dev = true) => navFor(roles, dev).map((i) => i.label);
-    expect(labels(["technician"])).toEqual(["Overview", "Help"]);
-    expect(labels(["lead"])).toEqual(["Overview", "Users", "Outbox", "Help"]);
-    expect(labels(["lead"], false)).toEqual(["Overview", "Users", "Help"]);
+    expect(labels(["technician"])).toEqual(["Overview", "Submissions", "Editions", "Help"]);
+    expect(labels(["reviewer"])).toEqual(["Overview", "Submissions", "Help"]);
+    expect(labels(["lead"])).toEqual(["Overview", "Submissions", "Editions", "Organisations", "Users", "Outbox", "Help"]);
+    expect(labels(["lead"], false)).toEqual(["Overview", "Submissions", "Editions", "Organisations", "Users", "Help"]);
+    expect(labels(["reviewer", "technician"])).toEqual(["Overview", "Submissions", "Editions", "Help"]);
     expect(labels(["manufacturer"])).toEqual(["Our submissions", "Help"]);
   });
 });

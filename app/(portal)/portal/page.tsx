@@ -1,5 +1,7 @@
+import { Suspense } from "react";
 import { requirePageActor } from "@/lib/auth/page-guard";
 import { ownOrganisation } from "@/lib/organisations/service";
+import { SubmissionList } from "@/app/_client/submission-list";
 
 export const metadata = { title: "Our submissions" };
 
@@ -11,14 +13,19 @@ export default async function PortalPage() {
       <div>
         <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">{organisation?.name}</p>
         <h1 className="text-3xl font-bold">Our submissions</h1>
-      </div>
-      <section className="rounded-lg border border-ink-100 bg-white p-6">
-        <h2 className="text-lg font-semibold">Nothing to show yet</h2>
-        <p className="mt-2 text-ink-600">
-          When the laboratory logs a submission from {organisation?.name ?? "your organisation"}, its status, results,
-          requests for more samples and reports appear here. You only ever see your own organisation&apos;s records.
+        <p className="mt-1 text-ink-600">
+          Each ball model the laboratory has received from {organisation?.name ?? "your organisation"}, with its status and current round.
+          You only ever see your own organisation&apos;s records.
         </p>
-      </section>
+      </div>
+      <Suspense fallback={<p className="text-ink-600">Loading submissions…</p>}>
+        <SubmissionList
+          caption={`Submissions of ${organisation?.name ?? "your organisation"}`}
+          basePath="/portal/submissions"
+          withOrganisation={false}
+          emptyText="Nothing to show yet. When the laboratory logs a submission from you, it appears here."
+        />
+      </Suspense>
     </div>
   );
 }

@@ -1,0 +1,46 @@
+"use client";
+
+import { useState, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { TextareaField } from "@/components/ui/textarea-field";
+import { apiError } from "@/app/_client/form-errors";
+import { useAcceptRun } from "@/app/_client/runs";
+
+const MIN_REASON = 10;
+
+/** A lead's acceptance of flagged conditions: the reason is kept with the run for the audit. */
+export function AcceptForm({ runId }: { runId: string }) {
+  const accept = useAcceptRun(runId);
+  const [reason, setReason] = useState("");
+  const [own, setOwn] = useState<string | null>(null);
+  const err = apiError(accept.error);
+
+  function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    const text = reason.trim();
+    if (text.length < MIN_REASON) return setOwn(`Write the reason in a sentence (at least ${MIN_REASON} characters).`);
+    setOwn(null);
+    accept.mutate(text);
+  }
+
+  return (
+    <form onSubmit={onSubmit} noValidate aria-labelledby="accept-heading" className="space-y-3 rounded-lg border border-wick-300 bg-white p-5 shadow-sm">
+      <h3 id="accept-heading" className="text-lg font-semibold">Accept anyway</h3>
+      <p className="text-sm text-ink-600">
+        Accepting keeps the run in the results despite the warnings above. Your name, the time and the reason are recorded with it.
+      </p>
+      <TextareaField
+        id="accept-reason"
+        label="Reason for accepting"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        maxLength={1000}
+        required
+        error={own ?? err?.fields.reason}
+      />
+      {err && <Notice tone="error">{err.message}</Notice>}
+      <Button type="submit" disabled={accept.isPending}>{accept.isPending ? "Accepting…" : "Accept anyway"}</Button>
+    </form>
+  );
+}

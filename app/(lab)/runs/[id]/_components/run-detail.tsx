@@ -1,0 +1,60 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { ConditionWarnings } from "@/components/ui/condition-warnings";
+import { formatInstant } from "@/components/ui/dates";
+import { Notice } from "@/components/ui/notice";
+import { useRun } from "@/app/_client/runs";
+import { AcceptForm } from "./accept-form";
+import { EditRun } from "./edit-run";
+import { RunConditions } from "./run-conditions";
+
+export function RunDetail({ id, canEdit, isLead }: { id: string; canEdit: boolean; isLead: boolean }) {
+  const q = useRun(id);
+  const [editing, setEditing] = useState(false);
+  if (q.isPending) return <p className="text-ink-600" role="status">Loading the run…</p>;
+  if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
+  const run = q.data;
+
+  return (
+    <div className="space-y-6">
+      <div>
+        <Link href={`/submissions/${run.submissionId}`} className="text-sm font-semibold text-wick-700 underline">Back to the submission</Link>
+        <p className="mt-2 text-sm font-semibold uppercase tracking-wide text-wick-700">Sample {run.sampleSerial}</p>
+        <h1 className="text-3xl font-bold">Run tested {formatInstant(run.testedAt)}</h1>
+        <p className="mt-1 text-ink-600">Recorded by {run.technicianName} · {run.dropCount} drop{run.dropCount === 1 ? "" : "s"} to place on clips</p>
+      </div>
+
+      <section aria-labelledby="warnings-heading" className="space-y-3">
+        <h2 id="warnings-heading" className="text-xl font-semibold">Condition checks</h2>
+        <ConditionWarnings run={run} showWhen />
+        {run.needsAcceptance && (
+          <Notice tone="warn">
+            These conditions are outside the edition&apos;s limits. The run counts only once a lead accepts it with a reason, or once its conditions are corrected.
+          </Notice>
+        )}
+        {isLead && run.needsAcceptance && <AcceptForm runId={run.id} />}
+      </section>
+
+      {editing ? (
+        <section aria-labelledby="edit-heading" className="space-y-3">
+          <div className="flex flex-wrap items-center justify-between gap-3">
+            <h2 id="edit-heading" className="text-xl font-semibold">Edit conditions</h2>
+            <Button kind="secondary" onClick={() => setEditing(false)}>Cancel editing</Button>
+          </div>
+          <EditRun run={run} onSaved={() => setEditing(false)} />
+        </section>
+      ) : (
+        <section aria-labelledby="conditions-heading" className="space-y-3 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+          <div className="flex flex-wrap items-center justify-between gap-3">
+            <h2 id="conditions-heading" className="text-xl font-semibold">Conditions</h2>
+            {canEdit && <Button kind="secondary" onClick={() => setEditing(true)}>Edit conditions</Button>}
+          </div>
+          <RunConditions run={run} />
+        </section>
+      )}
+    </div>
+  );
+}

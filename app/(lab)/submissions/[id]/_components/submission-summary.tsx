@@ -1,0 +1,37 @@
+"use client";
+
+import Link from "next/link";
+import { formatDay } from "@/components/ui/dates";
+import { DetailList } from "@/components/ui/detail-list";
+import type { StaffSubmissionDetail } from "@/lib/submissions/view";
+import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
+
+const link = "font-semibold text-wick-700 underline";
+
+export function SubmissionSummary({ submission: s, edition }: Pick<StaffSubmissionDetail, "submission" | "edition">) {
+  const items = [
+    { label: "Organisation", value: s.organisationName },
+    { label: "Kind", value: KIND_LABELS[s.kind] },
+    { label: "Status", value: <StatusBadge status={s.status} /> },
+    { label: "Current round", value: s.currentRound },
+    { label: "Received", value: formatDay(s.receivedOn) },
+    { label: "Specification edition", value: <Link href={`/editions/${edition.id}`} className={link}>{edition.name}</Link> },
+    { label: "Weight classes", value: s.weightClassesLb.length ? s.weightClassesLb.map((lb) => `${lb} lb`).join(", ") : "not given" },
+    ...(s.approvalSubmissionId
+      ? [{ label: "Approval submission", value: <Link href={`/submissions/${s.approvalSubmissionId}`} className={link}>{s.approvalReference}</Link> }]
+      : []),
+  ];
+  return (
+    <header className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+      <div>
+        <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">Submission {s.reference}</p>
+        <h1 className="text-3xl font-bold">{s.modelName}</h1>
+      </div>
+      <DetailList items={items} />
+      <p className="text-sm text-ink-600">
+        Judged against {edition.name}: {edition.dropsPerBall} drops per ball, at least {edition.minAbsorptionS} s absorption time.
+      </p>
+      {s.notes && <p className="whitespace-pre-wrap text-sm text-ink-800">{s.notes}</p>}
+    </header>
+  );
+}

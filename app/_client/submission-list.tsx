@@ -1,0 +1,66 @@
+"use client";
+
+import { createColumnHelper } from "@tanstack/react-table";
+import Link from "next/link";
+import { useMemo } from "react";
+import { DataTable } from "@/components/ui/data-table";
+import { formatDay } from "@/components/ui/dates";
+import { Notice } from "@/components/ui/notice";
+import { Pager } from "@/components/ui/pager";
+import type { SubmissionView } from "@/lib/submissions/view";
+import { listSearch, useListState, type SortKey } from "./list-state";
+import { KIND_LABELS, StatusBadge } from "./submission-labels";
+import { useSubmissionPage } from "./submissions";
+
+const col = createColumnHelper<SubmissionView>();
+
+function columns(basePath: string, withOrganisation: boolean) {
+  return [
+    col.accessor("reference", {
+      id: "reference",
+      header: "Reference",
+      cell: (c) => <Link href={`${basePath}/${c.row.original.id}`} className="font-semibold text-wick-700 underline">{c.getValue()}</Link>,
+    }),
+    col.accessor("modelName", { id: "model", header: "Model" }),
+    ...(withOrganisation ? [col.accessor("organisationName", { id: "organisation", header: "Organisation" })] : []),
+    col.accessor("kind", { id: "kind", header: "Kind", cell: (c) => KIND_LABELS[c.getValue()] }),
+    col.accessor("status", { id: "status", header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
+    col.accessor("currentRound", { id: "round", header: "Round" }),
+    ...(withOrganisation ? [col.accessor("sampleCount", { id: "samples", header: "Samples", enableSorting: false })] : []),
+    col.accessor("receivedOn", { id: "received", header: "Received", cell: (c) => <span className="whitespace-nowrap">{formatDay(c.getValue())}</span> }),
+  ];
+}
+
+/** The submissions table, paged, sorted and filtered by the server from what the address says. */
+export function SubmissionList({ caption, basePath, withOrganisation = true, emptyText = "No submissions match." }: { caption: string; basePath: string; withOrganisation?: boolean; emptyText?: string }) {
+  const { state, update } = useListState();
+  const list = useSubmissionPage(listSearch(state, true));
+  const cols = useMemo(() => columns(basePath, withOrganisation), [basePath, withOrganisation]);
+
+  if (list.isPending) return <p className="text-ink-600" role="status">Loading submissions…</p>;
+  if (list.isError) return <Notice tone="error">{list.error.message}</Notice>;
+  const { rows, total } = list.data;
+  // A shared link may point past the end after records changed; offer the last page instead of nothing.
+  const lastPage = Math.max(1, Math.ceil(total / state.pageSize));
+  return (
+    <div className="space-y-3" aria-busy={list.isFetching}>
+      <DataTable
+        caption={caption}
+        columns={cols}
+        data={rows}
+        rowKey={(r) => r.id}
+        sort={{ id: state.sort, desc: state.dir === "desc" }}
+        onSort={(s) => update({ sort: s.id as SortKey, dir: s.desc ? "desc" : "asc" })}
+        empty={state.page > lastPage ? "This page is past the end of the list." : emptyText}
+      />
+      <Pager
+        label="Submission pages"
+        page={state.page}
+        pageSize={state.pageSize}
+        total={total}
+        onPage={(page) => update({ page: Math.min(Math.max(1, page), lastPage) })}
+        onPageSize={(pageSize) => update({ pageSize })}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,8 @@
+import { signPartsSchema } from "@/lib/clips/schema";
+import * as uploads from "@/lib/clips/upload-service";
+import { idParam, route } from "@/lib/http/route";
+
+// POST /api/clips/:id/parts/sign — presigned URLs for the browser to PUT these parts to storage.
+export const POST = route({ signedIn: true, body: signPartsSchema }, async ({ actor, params, body }) =>
+  uploads.signParts(actor, idParam(params, "id", "clip"), body.partNumbers),
+);

@@ -1,0 +1,30 @@
+import type { Rational } from "./rules";
+
+/**
+ * Does the proxy keep every frame of the original, in order, at the same time after the start
+ * offset? Times are compared exactly as rationals, within half a tick of the proxy's time base.
+ * Returns the first problem in words, or null.
+ */
+export function proxyMismatch(index: { pts: readonly number[]; timeBase: Rational }, proxy: { pts: readonly number[]; timeBase: Rational }): string | null {
+  if (proxy.pts.length !== index.pts.length) return `the proxy has ${proxy.pts.length} frames where the original has ${index.pts.length}`;
+  const first = index.pts[0];
+  const a = index.timeBase;
+  const b = proxy.timeBase;
+  for (let i = 0; i < index.pts.length; i++) {
+    // (pts − first)·a.num/a.den against p·b.num/b.den, cross-multiplied to stay in integers.
+    const lhs = BigInt(index.pts[i] - first) * BigInt(a.num) * BigInt(b.den);
+    const rhs = BigInt(proxy.pts[i]) * BigInt(b.num) * BigInt(a.den);
+    const diff = lhs > rhs ? lhs - rhs : rhs - lhs;
+    if (diff * 2n > BigInt(b.num) * BigInt(a.den)) {
+      const t = (Number(index.pts[i] - first) * a.num) / a.den;
+      const u = (proxy.pts[i] * b.num) / b.den;
+      return `frame ${i} is at ${u.toFixed(6)} s in the proxy but ${t.toFixed(6)} s in the original`;
+    }
+  }
+  return null;
+}
+
+/** About half a second of frames between keyframes, at least one. */
+export function proxyGop(averageRate: number): number {
+  return Math.max(1, Math.min(30, Math.round(averageRate / 2)));
+}

@@ -1,0 +1,58 @@
+import type { FrameIndexRow, RenditionRow } from "./index-queries";
+import type { ClipRow, StepRow } from "./queries";
+import { STEP_LABELS, STEPS, type ClipStatus, type Step } from "./rules";
+
+export interface ClipView {
+  id: string;
+  runId: string;
+  originalName: string;
+  declaredSize: number;
+  storedSize: number | null;
+  status: ClipStatus;
+  rejectReason: string | null;
+  sha256: string | null;
+  duplicateOf: string | null;
+  createdAt: string;
+  readyAt: string | null;
+  format: string | null;
+  steps: { step: Step; label: string; state: StepRow["state"]; attempts: number; reason: string | null }[];
+  index: Omit<FrameIndexRow, "clipId" | "keyframes"> | null;
+  playback: { url: string; isProxy: boolean; offsetPts: number } | null;
+  posterUrl: string | null;
+  filmstrip: { url: string; tiles: number } | null;
+  proxyReason: string | null;
+}
+
+export function toClipView(
+  c: ClipRow,
+  steps: StepRow[],
+  index: FrameIndexRow | undefined,
+  rendition: RenditionRow | undefined,
+  urls: { original: string | null; proxy: string | null; poster: string | null; filmstrip: string | null },
+): ClipView {
+  const byStep = new Map(steps.map((s) => [s.step, s]));
+  const ready = c.status === "ready";
+  const { clipId: _c, keyframes: _k, ...summary } = index ?? ({} as FrameIndexRow);
+  return {
+    id: c.id,
+    runId: c.runId,
+    originalName: c.originalName,
+    declaredSize: c.declaredSize,
+    storedSize: c.storedSize,
+    status: c.status,
+    rejectReason: c.rejectReason,
+    sha256: c.sha256,
+    duplicateOf: c.duplicateOf,
+    createdAt: c.createdAt.toISOString(),
+    readyAt: c.readyAt?.toISOString() ?? null,
+    format: c.probe?.formatName ?? null,
+    steps: steps.length
+      ? STEPS.map((s) => ({ step: s, label: STEP_LABELS[s], state: byStep.get(s)?.state ?? "pending", attempts: byStep.get(s)?.attempts ?? 0, reason: byStep.get(s)?.reason ?? null }))
+      : [],
+    index: index ? summary : null,
+    playback: ready && index ? (urls.proxy ? { url: urls.proxy, isProxy: true, offsetPts: rendition?.proxyOffsetPts ?? index.firstPts } : urls.original ? { url: urls.original, isProxy: false, offsetPts: 0 } : null) : null,
+    posterUrl: urls.poster,
+    filmstrip: urls.filmstrip && rendition?.filmstripTiles ? { url: urls.filmstrip, tiles: rendition.filmstripTiles } : null,
+    proxyReason: rendition?.proxyReason || null,
+  };
+}

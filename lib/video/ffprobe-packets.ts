@@ -1,0 +1,76 @@
+import { spawn } from "node:child_process";
+import { createInterface } from "node:readline";
+import { parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from "./packet-order";
+
+// Per-frame timestamps without decoding: ffprobe's packet list is read in ~1 s for an hour of
+// 1080p, where -show_frames would decode every frame (minutes). Packets come in decode order;
+// toDisplayOrder sorts them. What the containers give (ffmpeg 5.1):
+//   mp4  pts everywhere; B-frames are hidden behind an edit list, so the first pts is 0 (dts < 0).
+//   mkv  pts in a 1 ms time base (rounded), dts N/A on reordered packets.
+//   ts   90 kHz; ffmpeg's muxer starts at 1.4 s (plus the B-frame delay) unless told otherwise.
+//   avi  no pts for H.264 at all, none for reordered MPEG-4 frames; dts is the chunk slot.
+
+export interface PacketTimes {
+  timeBase: Rational;
+  /** The stream's start_pts (null when ffprobe reports N/A). */
+  startPts: number | null;
+  /** Every frame's timestamp in display order (integers in timeBase). */
+  pts: number[];
+  /** Display indices of key frames. */
+  keyframes: number[];
+  clock: "pts" | "dts";
+}
+
+/** Runs a tool and hands each stdout line to `onLine` as it arrives; rejects with stderr's tail on failure. */
+function streamLines(cmd: string, args: string[], onLine: (line: string) => void): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(cmd, args, { stdio: ["ignore", "pipe", "pipe"] });
+    let stderr = "";
+    child.stderr.on("data", (d: Buffer) => {
+      stderr = (stderr + d.toString("utf8")).slice(-4000);
+    });
+    let failure: Error | null = null;
+    const lines = createInterface({ input: child.stdout, crlfDelay: Infinity });
+    lines.on("line", (l) => {
+      if (failure) return;
+      try {
+        onLine(l);
+      } catch (e) {
+        failure = e as Error;
+        child.kill("SIGKILL");
+      }
+    });
+    child.on("error", (e) => reject(new Error(`${cmd} could not be started: ${e.message}`)));
+    // "close" fires after stdout has ended, so every line has been seen.
+    child.on("close", (code) => {
+      if (failure) reject(failure);
+      else if (code !== 0) reject(new Error(`${cmd} failed (${code}): ${stderr.trim() || "no message"}`));
+      else resolve();
+    });
+  });
+}
+
+export async function probePacketTimes(file: string): Promise<PacketTimes> {
+  const packets: RawPacket[] = [];
+  let stream: { timeBase: Rational; startPts: number | null } | null = null;
+  const args = ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags:stream=time_base,start_pts", "-of", "csv=p=1", file];
+  await streamLines("ffprobe", args, (line) => {
+    const p = parseProbeLine(line);
+    if (p?.kind === "packet") packets.push(p.packet);
+    else if (p?.kind === "stream") stream = { timeBase: p.timeBase, startPts: p.startPts };
+  });
+  const s = stream as { timeBase: Rational; startPts: number | null } | null;
+  if (!s) throw new Error(`${file} has no video stream`);
+  if (packets.length === 0) throw new Error(`${file} has no video packets`);
+  return { ...s, ...toDisplayOrder(packets) };
+}
+
+export async function probeVideoSize(file: string): Promise<{ width: number; height: number }> {
+  let size: { width: number; height: number } | null = null;
+  await streamLines("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "stream=width,height", "-of", "csv=p=0", file], (line) => {
+    const m = /^(\d+),(\d+)/.exec(line);
+    if (m && !size) size = { width: Number(m[1]), height: Number(m[2]) };
+  });
+  if (!size) throw new Error(`${file} has no video stream`);
+  return size;
+}
