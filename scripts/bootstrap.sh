@@ -26,6 +26,9 @@ if ! [ -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modu
   npm ci --no-audit --no-fund
 fi
 
+# ffmpeg.wasm is served from the app itself; its files are copied from node_modules, never committed.
+[ -f public/ffmpeg/core/ffmpeg-core.wasm ] || node scripts/copy-ffmpeg.mjs
+
 # `dev` is `start` with next dev and hot reload.
 if [ "$cmd" = dev ]; then cmd=start; set -- --dev "$@"; fi
 # npm does not pass SIGTERM on through its shell; the parent-death signal makes sure the
