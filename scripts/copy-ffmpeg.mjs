@@ -13,7 +13,9 @@ if (!existsSync(from("ffmpeg", "esm"))) {
   process.exit(0);
 }
 mkdirSync(out, { recursive: true });
-cpSync(from("ffmpeg", "esm"), path.join(out, "esm"), { recursive: true });
-cpSync(from("util", "esm"), path.join(out, "util"), { recursive: true });
+// Only the JavaScript: the packages' .d.ts files would otherwise join the app's type check.
+const jsOnly = { recursive: true, filter: (src) => !src.endsWith(".d.ts") && !src.endsWith(".d.mts") };
+cpSync(from("ffmpeg", "esm"), path.join(out, "esm"), jsOnly);
+cpSync(from("util", "esm"), path.join(out, "util"), jsOnly);
 for (const f of ["ffmpeg-core.js", "ffmpeg-core.wasm"]) cpSync(path.join(from("core", "esm"), f), path.join(out, "core", f));
 console.log("copy-ffmpeg: public/ffmpeg is ready");

@@ -37,6 +37,9 @@ export const editionInputSchema = z
     notes: optionalText("Notes"),
     basedOnId: z.uuid().nullish(),
   })
-  .refine((e) => e.surfaceTempMinC < e.surfaceTempMaxC, { path: ["surfaceTempMaxC"], message: "The highest surface temperature must be above the lowest." });
+  .refine((e) => !(Number.isFinite(e.surfaceTempMinC) && Number.isFinite(e.surfaceTempMaxC)) || e.surfaceTempMinC < e.surfaceTempMaxC, {
+    path: ["surfaceTempMaxC"],
+    message: "The highest surface temperature must be above the lowest.",
+  });
 export type EditionInput = z.input<typeof editionInputSchema>;
 export type EditionValues = z.output<typeof editionInputSchema>;

@@ -8,6 +8,7 @@ import { visibleSample } from "../samples/service";
 import { assertCanEditIntake, assertLead, assertVisible } from "../submissions/policy";
 import { findSubmission, updateSubmissionRow } from "../submissions/queries";
 import { toCelsius } from "../units/rules";
+import type { ConditionLimits } from "./conditions";
 import { findRun, insertRun, setAcceptance, updateRunRow, type RunColumns, type RunRow } from "./queries";
 import type { RunValues } from "./schema";
 import { toRunView, type RunView } from "./view";
@@ -17,11 +18,14 @@ function toColumns(v: RunValues): RunColumns {
   return { ...rest, dispenserCheck: rest.dispenserCheck ?? null, roomTempC: toCelsius(roomTemp.value, roomTemp.unit), surfaceTempC: toCelsius(surfaceTemp.value, surfaceTemp.unit) };
 }
 
-async function viewOf(q: Db, run: RunRow): Promise<RunView & { submissionId: string; sampleSerial: string }> {
+export type RunDetail = RunView & { submissionId: string; submissionReference: string; sampleSerial: string; limits: ConditionLimits };
+
+async function viewOf(q: Db, run: RunRow): Promise<RunDetail> {
   const sample = (await findSample(q, run.sampleId))!;
   const submission = (await findSubmission(q, sample.submissionId))!;
   const edition = (await findEdition(q, submission.editionId))!;
-  return { ...toRunView(run, sample, edition), submissionId: submission.id, sampleSerial: sample.serial };
+  const limits = { minAcclimationH: edition.minAcclimationH, surfaceTempMinC: edition.surfaceTempMinC, surfaceTempMaxC: edition.surfaceTempMaxC, roughnessMaxSdUm: edition.roughnessMaxSdUm };
+  return { ...toRunView(run, sample, edition), submissionId: submission.id, submissionReference: submission.reference, sampleSerial: sample.serial, limits };
 }
 
 async function visibleRun(actor: Actor, id: string, q: Db = db()): Promise<RunRow> {
@@ -33,7 +37,7 @@ async function visibleRun(actor: Actor, id: string, q: Db = db()): Promise<RunRo
 }
 
 /** Records one oil absorption test of a sample, with one drop per the edition's drops per ball. */
-export async function recordRun(actor: Actor, sampleId: string, v: RunValues): Promise<RunView> {
+export async function recordRun(actor: Actor, sampleId: string, v: RunValues): Promise<RunDetail> {
   const sample = await visibleSample(actor, sampleId);
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
@@ -47,11 +51,11 @@ export async function recordRun(actor: Actor, sampleId: string, v: RunValues): P
   });
 }
 
-export async function getRun(actor: Actor, id: string): Promise<RunView> {
+export async function getRun(actor: Actor, id: string): Promise<RunDetail> {
   return viewOf(db(), await visibleRun(actor, id));
 }
 
-export async function updateRun(actor: Actor, id: string, v: RunValues): Promise<RunView> {
+export async function updateRun(actor: Actor, id: string, v: RunValues): Promise<RunDetail> {
   await visibleRun(actor, id);
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
@@ -64,7 +68,7 @@ export async function updateRun(actor: Actor, id: string, v: RunValues): Promise
 }
 
 /** A lead accepts a run whose conditions are flagged, with a written reason. */
-export async function acceptRun(actor: Actor, id: string, reason: string): Promise<RunView> {
+export async function acceptRun(actor: Actor, id: string, reason: string): Promise<RunDetail> {
   await visibleRun(actor, id);
   assertLead(actor, "accept a run with flagged conditions");
   return db().transaction(async (trx) => {
@@ -78,7 +82,7 @@ export async function acceptRun(actor: Actor, id: string, reason: string): Promi
   });
 }
 
-function snapshot(r: RunView) {
-  const { technicianName: _t, acceptedByName: _a, dropCount: _d, roughness: _r, ...rest } = r;
+function snapshot(r: RunDetail) {
+  const { technicianName: _t, acceptedByName: _a, dropCount: _d, roughness: _r, limits: _l, submissionReference: _s, ...rest } = r;
   return rest;
 }

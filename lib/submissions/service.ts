@@ -79,7 +79,16 @@ export async function getSubmission(actor: Actor, id: string): Promise<StaffSubm
   return {
     view: "staff",
     submission: toSubmissionView(s),
-    edition: { id: edition.id, name: edition.name, dropsPerBall: edition.dropsPerBall, minAbsorptionS: edition.minAbsorptionS },
+    edition: {
+      id: edition.id,
+      name: edition.name,
+      dropsPerBall: edition.dropsPerBall,
+      minAbsorptionS: edition.minAbsorptionS,
+      minAcclimationH: edition.minAcclimationH,
+      surfaceTempMinC: edition.surfaceTempMinC,
+      surfaceTempMaxC: edition.surfaceTempMaxC,
+      roughnessMaxSdUm: edition.roughnessMaxSdUm,
+    },
     rounds: grouped,
     flaggedRuns: grouped.flatMap((g) => g.samples.flatMap((x) => x.runs)).filter((r) => r.needsAcceptance).length,
   };

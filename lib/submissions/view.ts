@@ -42,7 +42,7 @@ export function toManufacturerView(s: SubmissionRow, samples: { round: number }[
 export interface StaffSubmissionDetail {
   view: "staff";
   submission: SubmissionView;
-  edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number };
+  edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number; minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
   rounds: { round: number; samples: (SampleView & { runs: RunView[] })[] }[];
   flaggedRuns: number;
 }
