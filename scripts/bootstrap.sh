@@ -5,7 +5,7 @@ set -euo pipefail
 # The AWS SDK warns at every start that its Node 20 support ends; versions are pinned (DEVELOPERS.md).
 export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 cd "$(dirname "$0")/.."
-cmd="${1:?usage: bootstrap.sh start|test|dev}"
+cmd="${1:?usage: bootstrap.sh start|test|dev|bench/index}"
 shift
 
 need=()

@@ -5,10 +5,14 @@ import { parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from ".
 // Per-frame timestamps without decoding: ffprobe's packet list is read in ~1 s for an hour of
 // 1080p, where -show_frames would decode every frame (minutes). Packets come in decode order;
 // toDisplayOrder sorts them. What the containers give (ffmpeg 5.1):
-//   mp4  pts everywhere; B-frames are hidden behind an edit list, so the first pts is 0 (dts < 0).
-//   mkv  pts in a 1 ms time base (rounded), dts N/A on reordered packets.
-//   ts   90 kHz; ffmpeg's muxer starts at 1.4 s (plus the B-frame delay) unless told otherwise.
-//   avi  no pts for H.264 at all, none for reordered MPEG-4 frames; dts is the chunk slot.
+//   mp4  pts on every packet; B-frame delay hidden by an edit list (first pts 0 or the offset, dts < it).
+//   mkv  pts in a 1 ms time base (rounded: 30000/1001 steps 33/34 ms); dts N/A on reordered packets.
+//   ts   90 kHz; ffmpeg's muxer starts at 1.4 s, plus the B-frame delay, plus any offset.
+//   avi  no pts at all for H.264; MPEG-4 Part 2 has pts = dts, except N/A on the frames that
+//        B-frames reorder. Every chunk owns one slot of the stream rate (empty chunks fill the
+//        gaps of a variable rate), so the dts is the frame's time. Decoding does not help:
+//        ffmpeg stamps decoded AVI frames with a later packet's dts (1 slot late with MPEG-4
+//        B-frames, 2 with H.264) and leaves the last frame without a timestamp.
 
 export interface PacketTimes {
   timeBase: Rational;
