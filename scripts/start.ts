@@ -4,7 +4,9 @@ import { migrateAndSeed } from "./database";
 import { PROFILES } from "./profiles";
 import type { Service } from "./services/service";
 import { startStack } from "./stack";
+import { db } from "../lib/db";
 import { DEMO_PASSWORD, DEMO_USERS } from "../seeds/demo";
+import { seedDemoClips } from "../seeds/demo-clips";
 
 // `npm start` (and `npm run dev` with --dev): everything on loopback, data kept between runs.
 const dev = process.argv.includes("--dev");
@@ -13,6 +15,8 @@ const log = (s: string) => console.log(`[wickmark] ${s}`);
 
 async function main() {
   const stack = await startStack(profile, log);
+  // The orchestrator itself uses lib/ (the demo recordings), with the same settings as the app.
+  Object.assign(process.env, stack.env);
   const running: Service[] = [...stack.services];
   let stopping = false;
   const shutdown = async (why: string, code: number) => {
@@ -42,6 +46,7 @@ async function main() {
   log(`Demo accounts (password "${DEMO_PASSWORD}"):`);
   for (const u of DEMO_USERS) log(`  ${u.roles.join(" + ").padEnd(18)} ${u.email}`);
   log(`Logs are in ${path.relative(process.cwd(), logs())}. Press Ctrl-C to stop.`);
+  seedDemoClips(db(), path.join(profile.dataDir, "demo-clips"), log).catch((err) => log(`demo recordings not made: ${err instanceof Error ? err.message : err}`));
 }
 
 const logs = () => path.join(profile.dataDir, "logs");

@@ -28,6 +28,8 @@ export interface SynthOptions {
    * 12 about 1.8 but ten times the bitrate and a third slower.
    */
   noise: number;
+  /** Absorption time of each drop in seconds (otherwise spread by the seed). */
+  durations?: number[];
   /** x264 preset; the generator favours speed, recorders' files are not small either. */
   preset: string;
   out: string;

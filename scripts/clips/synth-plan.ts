@@ -112,7 +112,7 @@ function placeDrops(o: Pick<SynthOptions, "width" | "height" | "drops">, rand: (
  * before and after it. Durations are spread (longest to ~55 % of it), shuffled by the seed, so
  * drops are told apart by duration as well as by place.
  */
-export function planDrops(o: Pick<SynthOptions, "width" | "height" | "drops" | "seed" | "length">, frames: FramePlan): DropPlan[] {
+export function planDrops(o: Pick<SynthOptions, "width" | "height" | "drops" | "seed" | "length"> & { durations?: readonly number[] }, frames: FramePlan): DropPlan[] {
   const rand = rng(o.seed);
   const spots = placeDrops(o, rand);
   const slot = o.length / o.drops;
@@ -130,7 +130,10 @@ export function planDrops(o: Pick<SynthOptions, "width" | "height" | "drops" | "
   };
   return spots.map((s, i) => {
     const lead = slot * (0.08 + 0.14 * rand());
-    const duration = Math.min(MAX_DROP_SECONDS, longest * fractions[i] * (0.96 + 0.08 * rand()));
+    // Given durations (the demo's, near a limit) are kept as they are; the slot must hold them.
+    const spread = Math.min(MAX_DROP_SECONDS, longest * fractions[i] * (0.96 + 0.08 * rand()));
+    const duration = o.durations?.[i] ?? spread;
+    if (lead + duration >= slot) throw new Error(`drop ${i} of ${duration} s does not fit its ${slot.toFixed(1)} s share of the clip; make the clip longer`);
     const d = snap(i * slot + lead);
     const c = snap(i * slot + lead + duration);
     if (d.frame < 2 || c.frame - d.frame < 3) throw new Error(`clip too short for ${o.drops} drops at this frame rate`);
