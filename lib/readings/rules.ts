@@ -1,0 +1,75 @@
+import { durationUncertaintyOfMarks } from "../stats/uncertainty";
+
+// A reading's time comes from the clip's own frame timestamps, never from frame number ÷ rate:
+// clips can have a variable rate and a first timestamp that is not zero. Pure.
+
+export interface FrameTimes {
+  pts: readonly number[];
+  timeBase: { num: number; den: number };
+}
+
+export type MarkProblem = { ok: false; reason: string };
+
+const seconds = (ticks: number, tb: FrameTimes["timeBase"]) => (ticks * tb.num) / tb.den;
+
+/** The display interval of a frame: until the next frame (the last frame takes its predecessor's). */
+export function frameInterval(ix: FrameTimes, frame: number): number {
+  const n = ix.pts.length;
+  if (n < 2) return 0;
+  return frame < n - 1 ? seconds(ix.pts[frame + 1] - ix.pts[frame], ix.timeBase) : seconds(ix.pts[n - 1] - ix.pts[n - 2], ix.timeBase);
+}
+
+export interface DropTime {
+  ok: true;
+  dispensePts: number;
+  clearPts: number;
+  /** pts(clear) − pts(dispense), in time-base ticks: exact. */
+  ticks: number;
+  seconds: number;
+  uncertainty: { standard: number; expanded: number };
+}
+
+/** The time of a drop from its two marked frames, with the frame-quantisation uncertainty (GUM). */
+export function dropTime(ix: FrameTimes, dispenseFrame: number, clearFrame: number): DropTime | MarkProblem {
+  const n = ix.pts.length;
+  for (const [name, f] of [["dispense", dispenseFrame], ["clear", clearFrame]] as const) {
+    if (!Number.isInteger(f) || f < 0 || f >= n) return { ok: false, reason: `The ${name} frame ${f} is outside the clip, which has frames 0 to ${n - 1}.` };
+  }
+  if (clearFrame <= dispenseFrame) return { ok: false, reason: `The clear frame (${clearFrame}) must come after the dispense frame (${dispenseFrame}).` };
+  const ticks = ix.pts[clearFrame] - ix.pts[dispenseFrame];
+  return {
+    ok: true,
+    dispensePts: ix.pts[dispenseFrame],
+    clearPts: ix.pts[clearFrame],
+    ticks,
+    seconds: seconds(ticks, ix.timeBase),
+    uncertainty: durationUncertaintyOfMarks(frameInterval(ix, dispenseFrame), frameInterval(ix, clearFrame)),
+  };
+}
+
+export interface Agreement {
+  agreed: boolean;
+  /** b − a on the drop time, and on each mark, in seconds. */
+  timeDifferenceS: number;
+  dispenseDifferenceS: number;
+  clearDifferenceS: number;
+  /** The mean of the two times when they agree. */
+  agreedValueS: number | null;
+}
+
+/** Two readings agree when the drop times and each mark differ by no more than the tolerance. */
+export function compareReadings(
+  a: { dispensePts: number; clearPts: number },
+  b: { dispensePts: number; clearPts: number },
+  timeBase: FrameTimes["timeBase"],
+  toleranceS: number,
+): Agreement {
+  const time = (r: typeof a) => seconds(r.clearPts - r.dispensePts, timeBase);
+  const timeDifferenceS = time(b) - time(a);
+  const dispenseDifferenceS = seconds(b.dispensePts - a.dispensePts, timeBase);
+  const clearDifferenceS = seconds(b.clearPts - a.clearPts, timeBase);
+  // A hair of slack keeps a difference of exactly the tolerance from failing on binary rounding.
+  const within = (d: number) => Math.abs(d) <= toleranceS + 1e-9;
+  const agreed = within(timeDifferenceS) && within(dispenseDifferenceS) && within(clearDifferenceS);
+  return { agreed, timeDifferenceS, dispenseDifferenceS, clearDifferenceS, agreedValueS: agreed ? (time(a) + time(b)) / 2 : null };
+}
