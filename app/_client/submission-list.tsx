@@ -7,24 +7,35 @@ import { DataTable } from "@/components/ui/data-table";
 import { formatDay } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
-import type { SubmissionView } from "@/lib/submissions/view";
 import { listSearch, useListState, type SortKey } from "./list-state";
 import { KIND_LABELS, StatusBadge } from "./submission-labels";
-import { useSubmissionPage } from "./submissions";
+import { useSubmissionPage, type SubmissionRow } from "./submissions";
 
-const col = createColumnHelper<SubmissionView>();
+const col = createColumnHelper<SubmissionRow>();
+
+/** "⚠ 1 flagged": runs with condition warnings that no lead has accepted. */
+function FlaggedBadge({ n }: { n: number | undefined }) {
+  if (!n) return <span className="text-ink-600"><span aria-hidden="true">—</span><span className="sr-only">none</span></span>;
+  return (
+    <span className="whitespace-nowrap rounded-full bg-wick-100 px-2 py-0.5 text-xs font-semibold text-wick-700" title={`${n} run${n === 1 ? "" : "s"} with condition warnings not yet accepted`}>
+      <span aria-hidden="true">⚠ </span>
+      {n} flagged<span className="sr-only"> run{n === 1 ? "" : "s"}</span>
+    </span>
+  );
+}
 
 function columns(basePath: string, withOrganisation: boolean) {
   return [
     col.accessor("reference", {
       id: "reference",
       header: "Reference",
-      cell: (c) => <Link href={`${basePath}/${c.row.original.id}`} className="font-semibold text-wick-700 underline">{c.getValue()}</Link>,
+      cell: (c) => <Link href={`${basePath}/${c.row.original.id}`} className="whitespace-nowrap font-semibold text-wick-700 underline">{c.getValue()}</Link>,
     }),
     col.accessor("modelName", { id: "model", header: "Model" }),
     ...(withOrganisation ? [col.accessor("organisationName", { id: "organisation", header: "Organisation" })] : []),
     col.accessor("kind", { id: "kind", header: "Kind", cell: (c) => KIND_LABELS[c.getValue()] }),
     col.accessor("status", { id: "status", header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
+    ...(withOrganisation ? [col.accessor("flaggedRuns", { id: "flagged", header: "Conditions", enableSorting: false, cell: (c) => <FlaggedBadge n={c.getValue()} /> })] : []),
     col.accessor("currentRound", { id: "round", header: "Round" }),
     ...(withOrganisation ? [col.accessor("sampleCount", { id: "samples", header: "Samples", enableSorting: false })] : []),
     col.accessor("receivedOn", { id: "received", header: "Received", cell: (c) => <span className="whitespace-nowrap">{formatDay(c.getValue())}</span> }),

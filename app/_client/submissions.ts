@@ -7,8 +7,11 @@ import type { SampleView } from "@/lib/samples/view";
 import type { SubmissionInput } from "@/lib/submissions/schema";
 import type { ManufacturerSubmissionView, StaffSubmissionDetail, SubmissionView } from "@/lib/submissions/view";
 
+/** Staff rows also count the runs whose condition warnings no lead has accepted yet. */
+export type SubmissionRow = SubmissionView & { flaggedRuns?: number };
+
 export interface SubmissionPage {
-  rows: SubmissionView[];
+  rows: SubmissionRow[];
   total: number;
   page: number;
   pageSize: number;

@@ -28,17 +28,18 @@ export function MeasureField({
       <label htmlFor={id} className="block text-sm font-semibold text-ink-800">
         {label}
       </label>
-      <div className="flex gap-2">
+      {/* The number keeps room for about eight digits; in a narrow cell the unit picker moves under it. */}
+      <div className="flex flex-wrap gap-2">
         <input
           id={id}
           inputMode="decimal"
           autoComplete="off"
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy(id, error, hint)}
-          className={`${CONTROL_BASE} w-full min-w-0 flex-1`}
+          className={`${CONTROL_BASE} min-w-32 flex-1 basis-32`}
           {...valueProps}
         />
-        <select id={`${id}-unit`} aria-label={`Unit of ${label.toLowerCase()}`} className={`${CONTROL_BASE} w-24 shrink-0`} {...unitProps}>
+        <select id={`${id}-unit`} aria-label={`Unit of ${label.toLowerCase()}`} className={`${CONTROL_BASE} w-auto min-w-20 shrink-0`} {...unitProps}>
           {units.map((u) => (
             <option key={u.value} value={u.value}>
               {u.label}

@@ -62,7 +62,8 @@ describe("signing in as each role", () => {
     await page.waitForURL(`${APP_URL}/portal`);
     await page.goto(`${APP_URL}/users`);
     await page.waitForURL(`${APP_URL}/portal`);
-    expect(await page.getByRole("table").count()).toBe(0);
+    await page.getByRole("heading", { name: "Our submissions" }).waitFor();
+    expect(await page.getByRole("heading", { name: "Users" }).count()).toBe(0);
     await page.close();
   });
 });

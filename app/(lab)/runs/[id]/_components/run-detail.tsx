@@ -9,6 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { useRun } from "@/app/_client/runs";
 import { AcceptForm } from "./accept-form";
 import { EditRun } from "./edit-run";
+import { Recordings } from "./recordings";
 import { RunConditions } from "./run-conditions";
 
 export function RunDetail({ id, canEdit, isLead }: { id: string; canEdit: boolean; isLead: boolean }) {
@@ -55,6 +56,8 @@ export function RunDetail({ id, canEdit, isLead }: { id: string; canEdit: boolea
           <RunConditions run={run} />
         </section>
       )}
+
+      <Recordings runId={run.id} canUpload={canEdit} />
     </div>
   );
 }

@@ -1,0 +1,44 @@
+// Trims a recording in the browser by stream copy: no re-encoding, so it is quick, but the result
+// starts at the keyframe at or before the chosen start. The end is cut where the packets allow
+// (copyEndFor), so the clip holds every frame up to the chosen end and no stray one after it. The input is mounted read-only (WORKERFS)
+// instead of copied into wasm memory; the output is held in memory until it is returned as a File.
+import type { FFFSType, LogEvent } from "@ffmpeg/ffmpeg";
+import { guessType } from "../upload/transport";
+import { loadFfmpeg } from "./ffmpeg-loader";
+import { packetsAround } from "./trim-probe";
+import { copyEndFor, secondsLabel, splitName, trimmedName } from "./trim-rules";
+
+let runs = 0;
+
+export async function trimFile(file: File, start: number, end: number, onLog: (line: string) => void): Promise<File> {
+  const ffmpeg = await loadFfmpeg();
+  const { ext } = splitName(file.name);
+  const n = ++runs;
+  const dir = `/trim-in-${n}`;
+  const input = `${dir}/input${ext ? `.${ext}` : ""}`;
+  const output = `trim-out-${n}${ext ? `.${ext}` : ".mp4"}`;
+  const lines: string[] = [];
+  const log = ({ message }: LogEvent) => {
+    lines.push(message);
+    if (lines.length > 20) lines.shift();
+    onLog(message);
+  };
+  await ffmpeg.createDir(dir);
+  await ffmpeg.mount("WORKERFS" as FFFSType, { blobs: [{ name: input.slice(dir.length + 1), data: file }] }, dir);
+  ffmpeg.on("log", log);
+  try {
+    const to = copyEndFor(await packetsAround(ffmpeg, input, end), end);
+    onLog(`Cutting the copy at decode time ${to.toFixed(3)} s so that it ends with the frame shown at ${secondsLabel(end)} s.`);
+    const args = ["-hide_banner", "-ss", secondsLabel(start), "-to", to.toFixed(6), "-i", input, "-c", "copy", "-map", "0", "-avoid_negative_ts", "make_zero", output];
+    const code = await ffmpeg.exec(args);
+    if (code !== 0) throw new Error(`ffmpeg could not trim this file (exit code ${code}). Its last words: ${lines.slice(-3).join(" ") || "none"}`);
+    const data = await ffmpeg.readFile(output);
+    await ffmpeg.deleteFile(output).catch(() => undefined);
+    if (typeof data === "string" || data.length === 0) throw new Error("ffmpeg wrote an empty file: is the window inside the recording?");
+    return new File([data as Uint8Array<ArrayBuffer>], trimmedName(file.name, start, end), { type: file.type || guessType(file.name), lastModified: Date.now() });
+  } finally {
+    ffmpeg.off("log", log);
+    await ffmpeg.unmount(dir).catch(() => undefined);
+    await ffmpeg.deleteDir(dir).catch(() => undefined);
+  }
+}

@@ -1,0 +1,145 @@
+"use client";
+
+import { useCallback, useEffect, useReducer, useRef } from "react";
+import { useRefreshRunClips } from "../clips";
+import { isAbort, sendFile, type Progress } from "./multipart";
+import { removePending, savePending } from "./pending-store";
+import { SpeedMeter } from "./speed";
+import { browserNetwork, browserTransport, startUpload } from "./transport";
+import { jobsReducer, newJob, type UploadJob } from "./upload-jobs";
+
+const REDRAW_MS = 250;
+const words = (e: unknown) => (e instanceof Error ? e.message : "The upload stopped for an unknown reason.");
+
+/** The uploads of one run page: start, pause, resume, and progress to draw. */
+export function useUploads(runId: string) {
+  const [jobs, dispatch] = useReducer(jobsReducer, []);
+  const jobsNow = useRef(jobs);
+  const controllers = useRef(new Map<string, AbortController>());
+  // Keeping a large file in IndexedDB takes a while: sending does not wait for it, finishing does.
+  const keeping = useRef(new Map<string, Promise<boolean>>());
+  const starting = useRef(new Set<string>());
+  const refresh = useRefreshRunClips(runId);
+  useEffect(() => {
+    jobsNow.current = jobs;
+  }, [jobs]);
+  // Leaving the page stops the requests; the parts already recorded stay, and the upload can be resumed.
+  useEffect(() => () => controllers.current.forEach((c) => c.abort()), []);
+
+  const patch = useCallback((key: string, p: Partial<UploadJob>) => dispatch({ type: "patch", key, patch: p }), []);
+
+  const send = useCallback(
+    async (key: string, clipId: string, file: File) => {
+      if (controllers.current.has(key)) return;
+      const ctl = new AbortController();
+      controllers.current.set(key, ctl);
+      const meter = new SpeedMeter();
+      let drawn = { at: 0, parts: -1, phase: "", waiting: "" };
+      const seen: { last: Progress | null } = { last: null };
+      const onProgress = (p: Progress) => {
+        seen.last = p;
+        const now = performance.now();
+        meter.add(now, p.sentBytes);
+        const waiting = JSON.stringify(p.waiting);
+        // Progress events come many times a second: redraw a few times a second, and at every part.
+        if (now - drawn.at < REDRAW_MS && p.partsDone === drawn.parts && p.phase === drawn.phase && waiting === drawn.waiting) return;
+        drawn = { at: now, parts: p.partsDone, phase: p.phase, waiting };
+        patch(key, {
+          stage: p.phase === "completing" ? "completing" : "sending",
+          sentBytes: p.sentBytes,
+          partsDone: p.partsDone,
+          partCount: p.partCount,
+          speed: meter.bytesPerSecond(),
+          secondsLeft: meter.secondsLeft(p.totalBytes),
+          waiting: p.waiting,
+        });
+      };
+      patch(key, { stage: "sending", error: null, waiting: null, speed: null, secondsLeft: null });
+      try {
+        await sendFile({ clipId, file, transport: browserTransport, network: browserNetwork, signal: ctl.signal, onProgress });
+        await keeping.current.get(clipId);
+        await removePending(clipId);
+        patch(key, { stage: "processing", sentBytes: file.size, waiting: null });
+      } catch (e) {
+        // What was in flight is lost on a pause: the bar goes back to what the server holds.
+        const stored = seen.last ? { sentBytes: seen.last.storedBytes, partsDone: seen.last.partsDone } : {};
+        patch(key, { stage: "paused", waiting: null, speed: null, secondsLeft: null, error: isAbort(e) ? null : words(e), ...stored });
+      } finally {
+        controllers.current.delete(key);
+        refresh();
+      }
+    },
+    [patch, refresh],
+  );
+
+  const keep = useCallback(
+    (key: string, clipId: string, file: File) => {
+      const saving = savePending(runId, clipId, file);
+      keeping.current.set(clipId, saving);
+      void saving.then((kept) => patch(key, { kept }));
+    },
+    [patch, runId],
+  );
+
+  const add = useCallback((files: File[], over: Partial<UploadJob> = {}) => {
+    const made = files.map((f) => newJob(f, over));
+    dispatch({ type: "add", jobs: made });
+    jobsNow.current = [...jobsNow.current, ...made];
+    return made.map((j) => j.key);
+  }, []);
+
+  const start = useCallback(
+    async (key: string, file?: File, note?: string | null) => {
+      const job = jobsNow.current.find((j) => j.key === key);
+      if (!job || job.clipId || starting.current.has(key)) return; // a double click starts one upload
+      starting.current.add(key);
+      const f = file ?? job.file;
+      patch(key, { file: f, stage: "starting", error: null, ...(note !== undefined ? { note } : {}) });
+      try {
+        const plan = await startUpload(runId, f);
+        refresh();
+        if (plan.status === "rejected") return patch(key, { stage: "rejected", clipId: plan.clipId, rejectReason: plan.rejectReason });
+        patch(key, { clipId: plan.clipId, partCount: plan.partCount });
+        keep(key, plan.clipId, f);
+        await send(key, plan.clipId, f);
+      } catch (e) {
+        patch(key, { stage: "picked", error: words(e) });
+      } finally {
+        starting.current.delete(key);
+      }
+    },
+    [keep, patch, refresh, runId, send],
+  );
+
+  const pause = useCallback((key: string) => controllers.current.get(key)?.abort(), []);
+
+  const resume = useCallback(
+    (key: string) => {
+      const job = jobsNow.current.find((j) => j.key === key);
+      if (job?.clipId) void send(key, job.clipId, job.file);
+    },
+    [send],
+  );
+
+  /** Takes up an unfinished upload found after a reload (the file kept by the browser or picked again). */
+  const adopt = useCallback(
+    (clipId: string, file: File, kept: boolean) => {
+      if (jobsNow.current.some((j) => j.clipId === clipId)) return;
+      const job = newJob(file, { clipId, stage: "paused", kept });
+      dispatch({ type: "add", jobs: [job] });
+      jobsNow.current = [...jobsNow.current, job];
+      if (!kept) keep(job.key, clipId, file);
+      void send(job.key, clipId, file);
+    },
+    [keep, send],
+  );
+
+  const dismiss = useCallback((key: string) => {
+    controllers.current.get(key)?.abort();
+    dispatch({ type: "remove", key });
+  }, []);
+
+  return { jobs, add, start, pause, resume, adopt, dismiss };
+}
+
+export type Uploads = ReturnType<typeof useUploads>;
