@@ -33,8 +33,9 @@ afterAll(() => closeDb());
  */
 function ffprobeFrameTimes(file: string, container: string): number[] {
   const entries = container === "avi" ? "packet=dts" : "frame=best_effort_timestamp";
-  const out = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", entries, "-of", "csv=p=0", file], { encoding: "utf8" });
-  const times = out.trim().split("\n").map((l) => Number(l.split(",")[0]));
+  const out = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", entries, "-of", "json", file], { encoding: "utf8", maxBuffer: 1 << 26 });
+  const json = JSON.parse(out) as { frames?: { best_effort_timestamp: number }[]; packets?: { dts: number }[] };
+  const times = container === "avi" ? json.packets!.map((p) => p.dts) : json.frames!.map((f) => f.best_effort_timestamp);
   return container === "avi" ? times.sort((a, b) => a - b) : times;
 }
 
