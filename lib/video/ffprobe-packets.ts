@@ -1,5 +1,4 @@
 import { spawn } from "node:child_process";
-import { createInterface } from "node:readline";
 import { parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from "./packet-order";
 
 // Per-frame timestamps without decoding: ffprobe's packet list is read in ~1 s for an hour of
@@ -34,15 +33,32 @@ function streamLines(cmd: string, args: string[], onLine: (line: string) => void
       stderr = (stderr + d.toString("utf8")).slice(-4000);
     });
     let failure: Error | null = null;
-    const lines = createInterface({ input: child.stdout, crlfDelay: Infinity });
-    lines.on("line", (l) => {
+    // Split the stream by hand: readline costs more than ffprobe itself on long clips.
+    let rest = "";
+    const take = (text: string) => {
       if (failure) return;
+      const lines = text.split("\n");
       try {
-        onLine(l);
+        for (const l of lines) onLine(l);
       } catch (e) {
         failure = e as Error;
         child.kill("SIGKILL");
       }
+    };
+    child.stdout.setEncoding("utf8");
+    child.stdout.on("data", (chunk: string) => {
+      const text = rest + chunk;
+      const cut = text.lastIndexOf("\n");
+      if (cut < 0) {
+        rest = text;
+        return;
+      }
+      rest = text.slice(cut + 1);
+      take(text.slice(0, cut));
+    });
+    child.stdout.on("end", () => {
+      if (rest) take(rest);
+      rest = "";
     });
     child.on("error", (e) => reject(new Error(`${cmd} could not be started: ${e.message}`)));
     // "close" fires after stdout has ended, so every line has been seen.
