@@ -31,9 +31,12 @@ async function main(): Promise<number> {
     running.push(await startNext(stack.env, profile.ports.app, "start", path.join(logs, "app.log")));
     log(`ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the tests`);
 
+    // Files the tests make live in the test data folder, which the next run wipes.
+    const tmp = path.join(profile.dataDir, "tmp");
+    fs.mkdirSync(tmp, { recursive: true });
     const args = [VITEST, "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...process.argv.slice(2)];
     const code = await new Promise<number>((resolve) => {
-      const child = spawn(process.execPath, args, { cwd: projectRoot, env: { ...process.env, ...stack.env }, stdio: "inherit" });
+      const child = spawn(process.execPath, args, { cwd: projectRoot, env: { ...process.env, ...stack.env, TEST_TMP_DIR: tmp }, stdio: "inherit" });
       child.on("exit", (c) => resolve(c ?? 1));
     });
     const totals = countResults(report);

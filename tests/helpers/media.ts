@@ -6,7 +6,7 @@ import path from "node:path";
 
 // Small media files for upload tests, made with Debian's ffmpeg on the spot.
 export const mediaDir = () => {
-  const dir = path.join(os.tmpdir(), `wickmark-media-${process.pid}`);
+  const dir = path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), `wickmark-media-${process.pid}`);
   mkdirSync(dir, { recursive: true });
   return dir;
 };

@@ -17,7 +17,7 @@ import { newRun, newSample, newSubmission } from "../helpers/intake";
 // frames the browser will step through (proxy, or the original) against the burned-in frame codes.
 let tech: Client;
 let runId: string;
-const dir = mkdtempSync(path.join(os.tmpdir(), "wickmark-pipeline-"));
+const dir = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wickmark-pipeline-"));
 
 beforeAll(async () => {
   tech = await signedIn(demo.email("technician"), demo.password);

@@ -14,7 +14,7 @@ import { planFrames } from "@/scripts/clips/synth-plan";
 // truth frames that match those timestamps, and a drop that is really there exactly from the
 // dispense frame to the frame before the clear frame. Needs ffmpeg, no services.
 
-const dir = mkdtempSync(path.join(os.tmpdir(), "wickmark-synth-test-"));
+const dir = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wickmark-synth-test-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 type Variant = Partial<SynthOptions> & { name: string };
