@@ -46,9 +46,14 @@ export function textFile(name = "notes.mp4"): string {
   return out;
 }
 
-export function randomFile(bytes: number): string {
-  const out = path.join(mediaDir(), `random-${randomBytes(3).toString("hex")}.bin`);
-  writeFileSync(out, randomBytes(bytes));
+/**
+ * A large file that is certainly no recording: text, unique per call. (Random bytes are not safe
+ * here: ffprobe now and then takes them for an audio or MPEG stream.)
+ */
+export function largeTextFile(bytes: number): string {
+  const out = path.join(mediaDir(), `large-${randomBytes(3).toString("hex")}.bin`);
+  const line = `${randomBytes(8).toString("hex")} this is a text file, not a recording\n`;
+  writeFileSync(out, line.repeat(Math.ceil(bytes / line.length)).slice(0, bytes));
   return out;
 }
 

@@ -8,7 +8,7 @@ import { signedIn, type Client } from "../helpers/app";
 import { complete, sendParts, uploadFile, waitForClip } from "../helpers/clips";
 import { demo } from "../helpers/fixtures";
 import { newRun, newSample, newSubmission } from "../helpers/intake";
-import { audioOnly, pngImage, plainMp4, randomFile, textFile, truncatedMp4 } from "../helpers/media";
+import { audioOnly, largeTextFile, pngImage, plainMp4, textFile, truncatedMp4 } from "../helpers/media";
 
 let tech: Client;
 let runId: string;
@@ -26,7 +26,7 @@ const objectKeyOf = async (clipId: string) => (await db()("clips").where({ id: c
 
 describe("multipart upload straight to storage", () => {
   it("resumes an interrupted upload from the parts the server recorded", async () => {
-    const file = randomFile(11 * 1024 * 1024 + 123);
+    const file = largeTextFile(11 * 1024 * 1024 + 123);
     const { clipId, partCount } = await uploadFile(tech, runId, file, { stopAfter: 1 });
     expect(partCount).toBe(3);
     // A reloaded page asks what is there, then sends only the rest.
