@@ -26,3 +26,8 @@ export async function closeDb(): Promise<void> {
 export function isUniqueViolation(err: unknown): boolean {
   return typeof err === "object" && err !== null && (err as { code?: string }).code === "23505";
 }
+
+/** A round trip to the database, for health checks. */
+export async function pingDb(q: Db): Promise<void> {
+  await q.raw("select 1");
+}

@@ -1,9 +1,9 @@
-import { db } from "./db";
+import { db, pingDb } from "./db";
 import { AppError } from "./errors";
 
 export async function checkHealth(): Promise<{ ok: true }> {
   try {
-    await db().raw("select 1");
+    await pingDb(db());
   } catch (err) {
     throw new AppError("unavailable", "The database is not answering.", { cause: err });
   }
