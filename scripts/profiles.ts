@@ -20,6 +20,10 @@ export interface Profile {
 }
 
 const dataRoot = path.join(projectRoot, ".data");
+// WICKMARK_PORT_OFFSET moves every port of both profiles, so two checkouts can run side by side.
+const offset = Number(process.env.WICKMARK_PORT_OFFSET ?? 0) || 0;
+const ports = (p: Profile["ports"]): Profile["ports"] =>
+  Object.fromEntries(Object.entries(p).map(([k, v]) => [k, v + offset])) as Profile["ports"];
 const tmpKey = Buffer.from(projectRoot).toString("base64url").slice(-12);
 
 export const PROFILES: Record<Profile["name"], Profile> = {
@@ -27,7 +31,7 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     name: "dev",
     dataDir: path.join(dataRoot, "dev"),
     pgFallbackDir: path.join(os.tmpdir(), `wickmark-${tmpKey}`, "dev-pg"),
-    ports: { app: 3000, pg: 54329, s3: 4569, smtp: 2525, mailApi: 2580 },
+    ports: ports({ app: 3000, pg: 54329, s3: 4569, smtp: 2525, mailApi: 2580 }),
     bucket: "wickmark",
     database: "wickmark",
     fast: false,
@@ -39,7 +43,7 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     name: "test",
     dataDir: path.join(dataRoot, "test"),
     pgFallbackDir: path.join(os.tmpdir(), `wickmark-${tmpKey}`, "test-pg"),
-    ports: { app: 3100, pg: 54339, s3: 4579, smtp: 2535, mailApi: 2590 },
+    ports: ports({ app: 3100, pg: 54339, s3: 4579, smtp: 2535, mailApi: 2590 }),
     bucket: "wickmark-test",
     database: "wickmark_test",
     fast: true,
