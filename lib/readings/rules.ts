@@ -73,3 +73,66 @@ export function compareReadings(
   const agreed = within(timeDifferenceS) && within(dispenseDifferenceS) && within(clearDifferenceS);
   return { agreed, timeDifferenceS, dispenseDifferenceS, clearDifferenceS, agreedValueS: agreed ? (time(a) + time(b)) / 2 : null };
 }
+
+export const DROP_STATES = ["unread", "read once", "agreed", "discrepancy", "ruled", "signed off"] as const;
+export type DropState = (typeof DROP_STATES)[number];
+
+export interface ChainReading {
+  id: string;
+  slot: number;
+  status: "draft" | "submitted";
+  supersedesId: string | null;
+  dispensePts: number | null;
+  clearPts: number | null;
+}
+
+/** The reading that counts in each slot: the latest submitted one of its chain of corrections. */
+export function currentReadings<R extends ChainReading>(readings: readonly R[]): R[] {
+  const submitted = readings.filter((r) => r.status === "submitted");
+  const replaced = new Set(submitted.map((r) => r.supersedesId).filter((id): id is string => id !== null));
+  return submitted.filter((r) => !replaced.has(r.id)).sort((a, b) => a.slot - b.slot);
+}
+
+/** The ids of submitted readings that a later submitted correction replaced. */
+export function supersededIds(readings: readonly ChainReading[]): Set<string> {
+  return new Set(readings.filter((r) => r.status === "submitted" && r.supersedesId).map((r) => r.supersedesId!));
+}
+
+export interface DropOutcome {
+  state: Extract<DropState, "unread" | "read once" | "agreed" | "discrepancy">;
+  agreement: Agreement | null;
+}
+
+/** A drop's state from its readings: none, one, or two that agree or not within the tolerance. */
+export function dropOutcome(readings: readonly ChainReading[], timeBase: FrameTimes["timeBase"], toleranceS: number): DropOutcome {
+  const current = currentReadings(readings);
+  if (current.length === 0) return { state: "unread", agreement: null };
+  if (current.length === 1) return { state: "read once", agreement: null };
+  const [a, b] = current.map((r) => ({ dispensePts: r.dispensePts!, clearPts: r.clearPts! }));
+  const agreement = compareReadings(a, b, timeBase, toleranceS);
+  return { state: agreement.agreed ? "agreed" : "discrepancy", agreement };
+}
+
+export interface Marks {
+  dispenseFrame: number | null;
+  clearFrame: number | null;
+  dispensePts: number | null;
+  clearPts: number | null;
+  timeS: number | null;
+  uncertaintyStandardS: number | null;
+  uncertaintyExpandedS: number | null;
+}
+
+/** Looks each marked frame up in the index; with both marks, the drop time and its uncertainty. */
+export function marksFrom(ix: FrameTimes, dispenseFrame: number | null, clearFrame: number | null): Marks | MarkProblem {
+  const n = ix.pts.length;
+  for (const [name, f] of [["dispense", dispenseFrame], ["clear", clearFrame]] as const) {
+    if (f !== null && (!Number.isInteger(f) || f < 0 || f >= n)) return { ok: false, reason: `The ${name} frame ${f} is outside the clip, which has frames 0 to ${n - 1}.` };
+  }
+  const none = { timeS: null, uncertaintyStandardS: null, uncertaintyExpandedS: null };
+  const pts = (f: number | null) => (f === null ? null : ix.pts[f]);
+  if (dispenseFrame === null || clearFrame === null) return { dispenseFrame, clearFrame, dispensePts: pts(dispenseFrame), clearPts: pts(clearFrame), ...none };
+  const t = dropTime(ix, dispenseFrame, clearFrame);
+  if (!t.ok) return t;
+  return { dispenseFrame, clearFrame, dispensePts: t.dispensePts, clearPts: t.clearPts, timeS: t.seconds, uncertaintyStandardS: t.uncertainty.standard, uncertaintyExpandedS: t.uncertainty.expanded };
+}

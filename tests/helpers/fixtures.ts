@@ -18,18 +18,19 @@ export const uniqueEmail = (tag: string) => `${tag}-${randomBytes(4).toString("h
 /** A ready account, created through the data layer (the invite flow has its own test). */
 export async function makeUser(
   roles: Role[],
-  opts: { organisationId?: string; password?: string; invited?: boolean } = {},
-): Promise<{ id: string; email: string; password: string }> {
+  opts: { organisationId?: string; password?: string; invited?: boolean; name?: string } = {},
+): Promise<{ id: string; email: string; password: string; name: string }> {
   const email = uniqueEmail(roles.join("-"));
+  const name = opts.name ?? `Test ${roles.join(" ")}`;
   const password = opts.password ?? PASSWORD;
   const id = await insertUser(db(), {
     email,
-    name: `Test ${roles.join(" ")}`,
+    name,
     roles,
     organisationId: opts.organisationId ?? null,
     passwordHash: opts.invited ? null : await hashPassword(password),
   });
-  return { id, email, password };
+  return { id, email, password, name };
 }
 
 export async function demoOrganisationId(): Promise<string> {

@@ -6,6 +6,7 @@ import { demo, demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixt
 import { uploadFile, waitForClip } from "../helpers/clips";
 import { plainMp4 } from "../helpers/media";
 import { editionBody, goodRun, newEdition, newRun, newSample, newSubmission, today, uniqueName } from "../helpers/intake";
+import { placedDrops } from "../helpers/readings";
 import { discoverRoutes } from "../helpers/routes";
 
 // Every route handler × every role (and signed out) → the status the server must answer.
@@ -42,6 +43,30 @@ let clipRun: string;
 let readyClip: string;
 const uploadingClip = async () => (await uploadFile(lead, clipRun, clipFile, { stopAfter: 0 })).clipId;
 const uploadedClip = async () => (await uploadFile(lead, clipRun, clipFile, { stopAfter: 1 })).clipId;
+
+// Readings: the matrix reviewer works on drops of its own; a reading of the demo reviewer's is
+// one the matrix reviewer is blind to (404), while staff who do not read drops may see it.
+let drops: string[] = [];
+let readerClient: Client;
+const once = <T,>(make: () => Promise<T>) => {
+  let p: Promise<T> | undefined;
+  return () => (p ??= make());
+};
+const startDraft = async (dropId: string) => {
+  const res = await readerClient.post(`/api/drops/${dropId}/readings`, { dispenseFrame: 2, clearFrame: 20 });
+  return (await res.json()).drop.myDraft.id as string;
+};
+const otherReading = once(async () => {
+  const demoReviewer = await signedIn(demo.email("reviewer"), demo.password);
+  return (await (await demoReviewer.post(`/api/drops/${drops[2]}/readings`, { dispenseFrame: 1 })).json()).drop.myDraft.id as string;
+});
+const draftToSubmit = once(() => startDraft(drops[3]));
+const submittedReading = once(async () => {
+  const id = await startDraft(drops[4]);
+  await readerClient.post(`/api/readings/${id}/submit`);
+  return id;
+});
+const readers = (s: number): Record<Who, number> => ({ anon: 401, technician: 403, reviewer: s, lead: 403, manufacturer: 403 });
 
 const MATRIX: Record<string, Entry> = {
   "GET /api/auth/[...nextauth]": { path: "/api/auth/session", expect: everyone(200) },
@@ -98,6 +123,17 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },
+  "GET /api/runs/[id]/drops": { path: async () => `/api/runs/${clipRun}/drops`, expect: clipReaders(200) },
+  "GET /api/drops/[id]": { path: async () => `/api/drops/${drops[0]}`, expect: clipReaders(200) },
+  "PUT /api/drops/[id]/placement": { path: async () => `/api/drops/${drops[0]}/placement`, body: () => ({ clipId: readyClip, startFrame: 0 }), expect: clipEditors(200) },
+  "POST /api/drops/[id]/readings": { path: async () => `/api/drops/${drops[1]}/readings`, body: () => ({ dispenseFrame: 3 }), expect: readers(200) },
+  "GET /api/readings/[id]": { path: async () => `/api/readings/${await otherReading()}`, expect: { anon: 401, technician: 200, reviewer: 404, lead: 200, manufacturer: 404 } },
+  "PATCH /api/readings/[id]": { path: async () => `/api/readings/${await startDraft(drops[1])}`, body: () => ({ clearFrame: 30 }), expect: readers(200) },
+  "DELETE /api/readings/[id]": { path: async () => `/api/readings/${await startDraft(drops[5])}`, expect: readers(200) },
+  "POST /api/readings/[id]/submit": { path: async () => `/api/readings/${await draftToSubmit()}/submit`, body: () => ({}), expect: readers(200) },
+  "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
+  "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
+  "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
 };
 
 const clients = new Map<Who, Client>();
@@ -113,6 +149,12 @@ beforeAll(async () => {
     const u = await makeUser([who], { organisationId: who === "manufacturer" ? org : undefined });
     clients.set(who, await signedIn(u.email, u.password));
   }
+  readerClient = clients.get("reviewer")!;
+  for (const r of [clipRun, (await placedDrops(lead)).runId]) {
+    const list = (await (await lead.get(`/api/runs/${r}/drops`)).json()).drops as { id: string; clip: unknown }[];
+    drops.push(...list.map((d) => d.id));
+  }
+  await Promise.all(drops.slice(0, 3).map((id) => lead.request("PUT", `/api/drops/${id}/placement`, { json: { clipId: readyClip, startFrame: 0 } })));
 });
 afterAll(() => closeDb());
 

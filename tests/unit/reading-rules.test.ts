@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { compareReadings, dropTime, frameInterval } from "@/lib/readings/rules";
+import { compareReadings, currentReadings, dropOutcome, dropTime, frameInterval, marksFrom, supersededIds, type ChainReading } from "@/lib/readings/rules";
 
 // A 30000/1001 clip in a 1/30000 time base starting at 10.5 s (pts 315000), one frame every 1001 ticks.
 const ntsc = { pts: Array.from({ length: 6000 }, (_, i) => 315_000 + 1001 * i), timeBase: { num: 1, den: 30000 } };
@@ -54,5 +54,39 @@ describe("compareReadings", () => {
     expect(ba.timeDifferenceS).toBeCloseTo(-ab.timeDifferenceS, 12);
     expect(ba.clearDifferenceS).toBeCloseTo(-ab.clearDifferenceS, 12);
     expect(ba.agreedValueS).toBeCloseTo(ab.agreedValueS!, 12);
+  });
+});
+
+describe("drop state from readings", () => {
+  const tb = { num: 1, den: 1000 };
+  const r = (id: string, slot: number, dispensePts: number, clearPts: number, over: Partial<ChainReading> = {}): ChainReading => ({ id, slot, status: "submitted", supersedesId: null, dispensePts, clearPts, ...over });
+
+  it("counts only submitted readings, and of a chain of corrections only the latest", () => {
+    expect(dropOutcome([], tb, 0.5).state).toBe("unread");
+    expect(dropOutcome([r("a", 1, 0, 2000, { status: "draft" })], tb, 0.5).state).toBe("unread");
+    expect(dropOutcome([r("a", 1, 0, 2000)], tb, 0.5).state).toBe("read once");
+    const chain = [r("a", 1, 0, 9000), r("a2", 1, 0, 2000, { supersedesId: "a" }), r("b", 2, 100, 2100)];
+    expect(currentReadings(chain).map((x) => x.id)).toEqual(["a2", "b"]);
+    expect(supersededIds(chain)).toEqual(new Set(["a"]));
+    // A correction still in draft does not replace the submitted reading yet.
+    expect(currentReadings([r("a", 1, 0, 9000), r("a2", 1, 0, 2000, { supersedesId: "a", status: "draft" })]).map((x) => x.id)).toEqual(["a"]);
+  });
+
+  it("agrees within the tolerance (mean of the two), and is a discrepancy beyond it, on the time or on either mark", () => {
+    const agreed = dropOutcome([r("a", 1, 0, 2000), r("b", 2, 0, 2500)], tb, 0.5);
+    expect(agreed).toMatchObject({ state: "agreed", agreement: { agreedValueS: 2.25, timeDifferenceS: 0.5 } });
+    expect(dropOutcome([r("a", 1, 0, 2000), r("b", 2, 0, 2501)], tb, 0.5).state).toBe("discrepancy");
+    // Same time, but both marks a second late: the marks disagree, so the readings do.
+    expect(dropOutcome([r("a", 1, 0, 2000), r("b", 2, 1000, 3000)], tb, 0.5)).toMatchObject({ state: "discrepancy", agreement: { timeDifferenceS: 0, dispenseDifferenceS: 1 } });
+  });
+});
+
+describe("marks looked up in the frame index", () => {
+  const ix = { pts: [1000, 1033, 1067, 1100, 1150], timeBase: { num: 1, den: 1000 } };
+  it("keeps a single mark, computes the time once both are there, and refuses the rest with a reason", () => {
+    expect(marksFrom(ix, 1, null)).toMatchObject({ dispensePts: 1033, clearPts: null, timeS: null });
+    expect(marksFrom(ix, 1, 4)).toMatchObject({ dispensePts: 1033, clearPts: 1150, timeS: 0.117 });
+    expect(marksFrom(ix, 4, 1)).toEqual({ ok: false, reason: "The clear frame (1) must come after the dispense frame (4)." });
+    expect(marksFrom(ix, null, 5)).toEqual({ ok: false, reason: "The clear frame 5 is outside the clip, which has frames 0 to 4." });
   });
 });

@@ -1,0 +1,5 @@
+import { route } from "@/lib/http/route";
+import * as drops from "@/lib/readings/drop-service";
+
+// GET /api/work-queue — the drops waiting for the caller's reading.
+export const GET = route({ role: "reviewer" }, async ({ actor }) => ({ items: await drops.workQueue(actor) }));

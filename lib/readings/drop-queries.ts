@@ -1,0 +1,135 @@
+import type { Db } from "../db";
+import type { DropState } from "./rules";
+
+export interface DropRow {
+  id: string;
+  runId: string;
+  ordinal: number;
+  clipId: string | null;
+  startFrame: number | null;
+  placedBy: string | null;
+  placedByName: string | null;
+  placedAt: Date | null;
+  state: DropState;
+  stateChangedAt: Date | null;
+  agreedTimeS: number | null;
+  timeDifferenceS: number | null;
+  dispenseDifferenceS: number | null;
+  clearDifferenceS: number | null;
+  // Context: the clip it sits on, the sample and submission, and the edition's tolerance.
+  clipName: string | null;
+  clipStatus: string | null;
+  clipRejectReason: string | null;
+  sampleId: string;
+  sampleSerial: string;
+  submissionId: string;
+  submissionReference: string;
+  organisationId: string;
+  readingToleranceS: number;
+}
+
+function toDrop(r: Record<string, any>): DropRow {
+  return {
+    id: r.id,
+    runId: r.run_id,
+    ordinal: r.ordinal,
+    clipId: r.clip_id,
+    startFrame: r.start_frame,
+    placedBy: r.placed_by,
+    placedByName: r.placed_by_name,
+    placedAt: r.placed_at,
+    state: r.state,
+    stateChangedAt: r.state_changed_at,
+    agreedTimeS: r.agreed_time_s,
+    timeDifferenceS: r.time_difference_s,
+    dispenseDifferenceS: r.dispense_difference_s,
+    clearDifferenceS: r.clear_difference_s,
+    clipName: r.clip_name,
+    clipStatus: r.clip_status,
+    clipRejectReason: r.clip_reject_reason,
+    sampleId: r.sample_id,
+    sampleSerial: r.sample_serial,
+    submissionId: r.submission_id,
+    submissionReference: r.submission_reference,
+    organisationId: r.organisation_id,
+    readingToleranceS: r.reading_tolerance_s,
+  };
+}
+
+const base = (q: Db) =>
+  q("drops as d")
+    .join("runs as r", "r.id", "d.run_id")
+    .join("samples as s", "s.id", "r.sample_id")
+    .join("submissions as sub", "sub.id", "s.submission_id")
+    .join("specification_editions as e", "e.id", "sub.edition_id")
+    .leftJoin("clips as c", "c.id", "d.clip_id")
+    .leftJoin("users as p", "p.id", "d.placed_by")
+    .select(
+      "d.*",
+      "c.original_name as clip_name", "c.status as clip_status", "c.reject_reason as clip_reject_reason",
+      "s.id as sample_id", "s.serial as sample_serial",
+      "sub.id as submission_id", "sub.reference as submission_reference", "sub.organisation_id",
+      "e.reading_tolerance_s", "p.name as placed_by_name",
+    );
+
+export async function findDrop(q: Db, id: string, opts: { lock?: boolean } = {}): Promise<DropRow | undefined> {
+  // Lock the drop row alone: every change to a drop's readings takes this lock first.
+  if (opts.lock) await q("drops").where({ id }).forUpdate().first("id");
+  const r = await base(q).where("d.id", id).first();
+  return r ? toDrop(r) : undefined;
+}
+
+export async function listDropsOfRun(q: Db, runId: string): Promise<DropRow[]> {
+  return (await base(q).where("d.run_id", runId).orderBy("d.ordinal")).map(toDrop);
+}
+
+export async function countReadingsOfDrop(q: Db, dropId: string): Promise<number> {
+  const r = await q("readings").where({ drop_id: dropId }).count<{ count: string }[]>("* as count").first();
+  return Number(r?.count ?? 0);
+}
+
+export async function updatePlacement(q: Db, id: string, p: { clipId: string; startFrame: number; placedBy: string }): Promise<void> {
+  await q("drops").where({ id }).update({ clip_id: p.clipId, start_frame: p.startFrame, placed_by: p.placedBy, placed_at: q.fn.now() });
+}
+
+export async function updateDropOutcome(
+  q: Db,
+  id: string,
+  o: { state: DropState; agreedTimeS: number | null; timeDifferenceS: number | null; dispenseDifferenceS: number | null; clearDifferenceS: number | null },
+): Promise<void> {
+  await q("drops").where({ id }).update({
+    state: o.state,
+    state_changed_at: q.fn.now(),
+    agreed_time_s: o.agreedTimeS,
+    time_difference_s: o.timeDifferenceS,
+    dispense_difference_s: o.dispenseDifferenceS,
+    clear_difference_s: o.clearDifferenceS,
+  });
+}
+
+/**
+ * Drops waiting for one reviewer: placed on a ready clip, not yet settled, and either holding the
+ * reviewer's unfinished reading or still short of two readers none of whom is this reviewer.
+ */
+export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Promise<DropRow[]> {
+  const rows = await base(q)
+    .where("c.status", "ready")
+    .whereIn("d.state", ["unread", "read once"])
+    .where((w) =>
+      w
+        .whereExists((e) => e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where({ "m.reviewer_id": reviewerId, "m.status": "draft" }))
+        .orWhere((o) =>
+          o
+            .whereNotExists((e) => e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where("m.reviewer_id", reviewerId).whereNull("m.supersedes_id"))
+            .whereRaw("(select count(*) from readings h where h.drop_id = d.id and h.supersedes_id is null) < 2"),
+        ),
+    )
+    .orderBy([{ column: "d.placed_at", order: "asc" }, { column: "d.ordinal", order: "asc" }])
+    .limit(limit);
+  return rows.map(toDrop);
+}
+
+/** The leads' queue: drops whose two readings disagree, the oldest first. */
+export async function listDiscrepancies(q: Db, limit = 200): Promise<DropRow[]> {
+  return (await base(q).where("d.state", "discrepancy").orderBy("d.state_changed_at", "asc").limit(limit)).map(toDrop);
+}

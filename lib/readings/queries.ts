@@ -1,0 +1,109 @@
+import type { Db } from "../db";
+
+export interface ReadingRow {
+  id: string;
+  dropId: string;
+  clipId: string;
+  reviewerId: string;
+  reviewerName: string;
+  slot: number;
+  status: "draft" | "submitted";
+  dispenseFrame: number | null;
+  clearFrame: number | null;
+  dispensePts: number | null;
+  clearPts: number | null;
+  timeS: number | null;
+  uncertaintyStandardS: number | null;
+  uncertaintyExpandedS: number | null;
+  supersedesId: string | null;
+  correctionReason: string | null;
+  createdAt: Date;
+  updatedAt: Date;
+  submittedAt: Date | null;
+}
+
+const int = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+
+function toReading(r: Record<string, any>): ReadingRow {
+  return {
+    id: r.id,
+    dropId: r.drop_id,
+    clipId: r.clip_id,
+    reviewerId: r.reviewer_id,
+    reviewerName: r.reviewer_name,
+    slot: r.slot,
+    status: r.status,
+    dispenseFrame: r.dispense_frame,
+    clearFrame: r.clear_frame,
+    dispensePts: int(r.dispense_pts),
+    clearPts: int(r.clear_pts),
+    timeS: r.time_s,
+    uncertaintyStandardS: r.uncertainty_standard_s,
+    uncertaintyExpandedS: r.uncertainty_expanded_s,
+    supersedesId: r.supersedes_id,
+    correctionReason: r.correction_reason,
+    createdAt: r.created_at,
+    updatedAt: r.updated_at,
+    submittedAt: r.submitted_at,
+  };
+}
+
+const base = (q: Db) => q("readings as g").join("users as u", "u.id", "g.reviewer_id").select("g.*", "u.name as reviewer_name");
+
+export async function findReading(q: Db, id: string): Promise<ReadingRow | undefined> {
+  const r = await base(q).where("g.id", id).first();
+  return r ? toReading(r) : undefined;
+}
+
+export async function listReadingsOfDrop(q: Db, dropId: string): Promise<ReadingRow[]> {
+  return (await base(q).where("g.drop_id", dropId).orderBy("g.created_at")).map(toReading);
+}
+
+export async function listReadingsOfDrops(q: Db, dropIds: string[]): Promise<ReadingRow[]> {
+  if (dropIds.length === 0) return [];
+  return (await base(q).whereIn("g.drop_id", dropIds).orderBy("g.created_at")).map(toReading);
+}
+
+export interface MarkColumns {
+  dispenseFrame: number | null;
+  clearFrame: number | null;
+  dispensePts: number | null;
+  clearPts: number | null;
+  timeS: number | null;
+  uncertaintyStandardS: number | null;
+  uncertaintyExpandedS: number | null;
+}
+
+function markColumns(m: MarkColumns) {
+  return {
+    dispense_frame: m.dispenseFrame,
+    clear_frame: m.clearFrame,
+    dispense_pts: m.dispensePts,
+    clear_pts: m.clearPts,
+    time_s: m.timeS,
+    uncertainty_standard_s: m.uncertaintyStandardS,
+    uncertainty_expanded_s: m.uncertaintyExpandedS,
+  };
+}
+
+export async function insertReading(
+  q: Db,
+  r: { dropId: string; clipId: string; reviewerId: string; slot: number; supersedesId: string | null; correctionReason: string | null } & MarkColumns,
+): Promise<string> {
+  const [row] = await q("readings")
+    .insert({ drop_id: r.dropId, clip_id: r.clipId, reviewer_id: r.reviewerId, slot: r.slot, supersedes_id: r.supersedesId, correction_reason: r.correctionReason, ...markColumns(r) })
+    .returning("id");
+  return row.id;
+}
+
+export async function updateDraftMarks(q: Db, id: string, m: MarkColumns): Promise<void> {
+  await q("readings").where({ id, status: "draft" }).update({ ...markColumns(m), updated_at: q.fn.now() });
+}
+
+export async function markSubmitted(q: Db, id: string): Promise<void> {
+  await q("readings").where({ id, status: "draft" }).update({ status: "submitted", submitted_at: q.fn.now(), updated_at: q.fn.now() });
+}
+
+export async function deleteDraft(q: Db, id: string): Promise<void> {
+  await q("readings").where({ id, status: "draft" }).delete();
+}

@@ -1,0 +1,157 @@
+import type { Actor } from "../auth/actor";
+import { recordChange } from "../audit/record";
+import { findFrameIndex } from "../clips/index-queries";
+import { db, type Db } from "../db";
+import { AppError } from "../errors";
+import { findDrop, updateDropOutcome, type DropRow } from "./drop-queries";
+import { assertCanSeeDrops, assertReviewer, canSeeReading, isBlindFor } from "./policy";
+import { deleteDraft, findReading, insertReading, listReadingsOfDrop, markSubmitted, updateDraftMarks, type ReadingRow } from "./queries";
+import { currentReadings, dropOutcome, marksFrom, supersededIds, type Marks } from "./rules";
+import type { MarksInput } from "./schema";
+import { toDropView, toReadingView, type DropView, type ReadingView } from "./view";
+
+// A reviewer's reading of a drop: started as a draft, marked frame by frame, submitted once and for
+// all. Every change locks the drop first, so two readers finishing at once still settle it once.
+
+const NO_READING = "No such reading.";
+
+async function lockedDrop(actor: Actor, q: Db, dropId: string): Promise<DropRow> {
+  assertCanSeeDrops(actor);
+  const drop = await findDrop(q, dropId, { lock: true });
+  if (!drop) throw new AppError("not_found", "No such drop.");
+  return drop;
+}
+
+/** The clip must still be fit to read: ready, with its index. Returns the marks looked up in it. */
+async function lookUpMarks(q: Db, drop: DropRow, clipId: string, dispenseFrame: number | null, clearFrame: number | null): Promise<Marks> {
+  if (drop.clipStatus === "rejected" && drop.clipId === clipId) throw new AppError("conflict", `The clip was rejected (${drop.clipRejectReason ?? "no reason recorded"}); no marks can be made on it.`);
+  if (drop.clipStatus !== "ready" || drop.clipId !== clipId) throw new AppError("conflict", "The clip of this drop is not ready for reading.");
+  const index = await findFrameIndex(q, clipId);
+  if (!index) throw new AppError("conflict", "The clip of this drop has no frame index yet.");
+  const m = marksFrom(index, dispenseFrame, clearFrame);
+  if ("ok" in m) throw new AppError("validation", m.reason);
+  return m;
+}
+
+async function dropViewFor(actor: Actor, q: Db, dropId: string): Promise<DropView> {
+  const drop = (await findDrop(q, dropId))!;
+  return toDropView(actor, drop, await listReadingsOfDrop(q, dropId));
+}
+
+/** Starts the caller's reading of a drop (or returns the draft already started), with any marks. */
+export async function startReading(actor: Actor, dropId: string, marks: MarksInput = {}): Promise<DropView> {
+  assertReviewer(actor, "read drops");
+  return db().transaction(async (trx) => {
+    const drop = await lockedDrop(actor, trx, dropId);
+    if (!drop.clipId) throw new AppError("conflict", "This drop is not placed on a clip yet: a technician places it first.");
+    const readings = await listReadingsOfDrop(trx, dropId);
+    const mine = readings.filter((r) => r.reviewerId === actor.id);
+    const draft = mine.find((r) => r.status === "draft");
+    if (draft) {
+      if (marks.dispenseFrame !== undefined || marks.clearFrame !== undefined) await applyMarks(trx, drop, draft, marks);
+      return dropViewFor(actor, trx, dropId);
+    }
+    if (mine.length) throw new AppError("conflict", "You have already read this drop. The other reading must come from another reviewer; to fix your own, record a correction.");
+    const heads = readings.filter((r) => r.supersedesId === null);
+    if (heads.length >= 2 || !["unread", "read once"].includes(drop.state)) throw new AppError("conflict", "This drop already has its two readers.");
+    const m = await lookUpMarks(trx, drop, drop.clipId, marks.dispenseFrame ?? null, marks.clearFrame ?? null);
+    const slot = heads.some((r) => r.slot === 1) ? 2 : 1;
+    const id = await insertReading(trx, { dropId, clipId: drop.clipId, reviewerId: actor.id, slot, supersedesId: null, correctionReason: null, ...m });
+    await recordChange(trx, actor, { action: "reading.started", entity: "reading", entityId: id, after: { dropId, slot } });
+    return dropViewFor(actor, trx, dropId);
+  });
+}
+
+/** Only the author touches a reading before both are in; to anyone else it does not exist. */
+async function ownReading(actor: Actor, q: Db, id: string): Promise<ReadingRow> {
+  assertCanSeeDrops(actor);
+  const r = await findReading(q, id);
+  if (!r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
+  return r;
+}
+
+async function applyMarks(q: Db, drop: DropRow, draft: ReadingRow, marks: MarksInput): Promise<void> {
+  const dispense = marks.dispenseFrame === undefined ? draft.dispenseFrame : marks.dispenseFrame;
+  const clear = marks.clearFrame === undefined ? draft.clearFrame : marks.clearFrame;
+  await updateDraftMarks(q, draft.id, await lookUpMarks(q, drop, draft.clipId, dispense, clear));
+}
+
+export async function saveMarks(actor: Actor, id: string, marks: MarksInput): Promise<DropView> {
+  return db().transaction(async (trx) => {
+    const r = await ownReading(actor, trx, id);
+    const drop = await lockedDrop(actor, trx, r.dropId);
+    if (r.status !== "draft") throw new AppError("conflict", "This reading is submitted and cannot change. Record a correction instead.");
+    await applyMarks(trx, drop, r, marks);
+    return dropViewFor(actor, trx, r.dropId);
+  });
+}
+
+const BOTH_IN = "Both readings of this drop are in: it can no longer be corrected by a reader. A lead settles any disagreement by a ruling.";
+
+export async function submitReading(actor: Actor, id: string): Promise<DropView> {
+  return db().transaction(async (trx) => {
+    const r = await ownReading(actor, trx, id);
+    const drop = await lockedDrop(actor, trx, r.dropId);
+    if (r.status !== "draft") throw new AppError("conflict", "This reading is already submitted.");
+    if (r.dispenseFrame === null || r.clearFrame === null) throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
+    await lookUpMarks(trx, drop, r.clipId, r.dispenseFrame, r.clearFrame);
+    const readings = await listReadingsOfDrop(trx, r.dropId);
+    if (r.supersedesId && currentReadings(readings).length >= 2) throw new AppError("conflict", BOTH_IN);
+    await markSubmitted(trx, id);
+    const after = await listReadingsOfDrop(trx, r.dropId);
+    const index = (await findFrameIndex(trx, r.clipId))!;
+    const o = dropOutcome(after, index.timeBase, drop.readingToleranceS);
+    const a = o.agreement;
+    await updateDropOutcome(trx, drop.id, {
+      state: o.state,
+      agreedTimeS: a?.agreedValueS ?? null,
+      timeDifferenceS: a?.timeDifferenceS ?? null,
+      dispenseDifferenceS: a?.dispenseDifferenceS ?? null,
+      clearDifferenceS: a?.clearDifferenceS ?? null,
+    });
+    await recordChange(trx, actor, { action: r.supersedesId ? "reading.corrected" : "reading.submitted", entity: "reading", entityId: id, after: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame, timeS: r.timeS, supersedes: r.supersedesId } });
+    if (o.state !== drop.state) await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
+    return dropViewFor(actor, trx, r.dropId);
+  });
+}
+
+/** A correction is a new draft that will replace the caller's submitted reading; the old one stays. */
+export async function correctReading(actor: Actor, id: string, reason: string): Promise<DropView> {
+  assertReviewer(actor, "correct readings");
+  return db().transaction(async (trx) => {
+    const r = await ownReading(actor, trx, id);
+    const drop = await lockedDrop(actor, trx, r.dropId);
+    const readings = await listReadingsOfDrop(trx, r.dropId);
+    const current = currentReadings(readings);
+    if (r.status !== "submitted") throw new AppError("conflict", "This reading is still a draft: change its marks directly.");
+    if (current.length >= 2) throw new AppError("conflict", BOTH_IN);
+    if (!current.some((c) => c.id === r.id)) throw new AppError("conflict", "This reading was already replaced by a correction.");
+    if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft")) throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");
+    const m = await lookUpMarks(trx, drop, r.clipId, r.dispenseFrame, r.clearFrame);
+    const newId = await insertReading(trx, { dropId: r.dropId, clipId: r.clipId, reviewerId: actor.id, slot: r.slot, supersedesId: r.id, correctionReason: reason, ...m });
+    await recordChange(trx, actor, { action: "reading.correction_started", entity: "reading", entityId: newId, after: { supersedes: r.id, reason } });
+    return dropViewFor(actor, trx, r.dropId);
+  });
+}
+
+export async function discardDraft(actor: Actor, id: string): Promise<DropView> {
+  return db().transaction(async (trx) => {
+    const r = await ownReading(actor, trx, id);
+    await lockedDrop(actor, trx, r.dropId);
+    if (r.status !== "draft") throw new AppError("conflict", "A submitted reading is kept for good; record a correction instead.");
+    await deleteDraft(trx, id);
+    await recordChange(trx, actor, { action: "reading.discarded", entity: "reading", entityId: id, before: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame } });
+    return dropViewFor(actor, trx, r.dropId);
+  });
+}
+
+export async function getReading(actor: Actor, id: string): Promise<ReadingView> {
+  assertCanSeeDrops(actor);
+  const q = db();
+  const r = await findReading(q, id);
+  if (!r) throw new AppError("not_found", NO_READING);
+  const all = await listReadingsOfDrop(q, r.dropId);
+  const blind = isBlindFor(actor, currentReadings(all).length);
+  if (!canSeeReading(actor, r, blind)) throw new AppError("not_found", NO_READING);
+  return toReadingView(r, supersededIds(all), blind);
+}
