@@ -10,7 +10,7 @@ import { countReadingsOfDrop, findDrop, listDiscrepancies, listDropsOfRun, listQ
 import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer } from "./policy";
 import { listReadingsOfDrop, listReadingsOfDrops } from "./queries";
 import type { PlacementInput } from "./schema";
-import { toDropView, type DropView } from "./view";
+import { toDropView, type DropView, type QueueItem } from "./view";
 
 // Drops as the lab handles them: placed on a clip by a technician, queued for reviewers, and
 // settled or sent to the leads.
@@ -55,18 +55,6 @@ export async function placeDrop(actor: Actor, id: string, p: PlacementInput): Pr
   return getDrop(actor, id);
 }
 
-export interface QueueItem {
-  dropId: string;
-  ordinal: number;
-  runId: string;
-  sampleSerial: string;
-  submissionReference: string;
-  clipName: string;
-  startFrame: number;
-  placedAt: string;
-  /** The caller's own progress only: nothing about anyone else's reading. */
-  mine: "not started" | "draft" | "correction";
-}
 
 export async function workQueue(actor: Actor): Promise<QueueItem[]> {
   assertCanSeeDrops(actor);

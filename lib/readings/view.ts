@@ -54,6 +54,20 @@ export interface DropView {
   mySubmitted: ReadingView | null;
 }
 
+/** One line of a reviewer's queue. */
+export interface QueueItem {
+  dropId: string;
+  ordinal: number;
+  runId: string;
+  sampleSerial: string;
+  submissionReference: string;
+  clipName: string;
+  startFrame: number;
+  placedAt: string;
+  /** The caller's own progress only: nothing about anyone else's reading. */
+  mine: "not started" | "draft" | "correction";
+}
+
 export function toReadingView(r: ReadingRow, supersededSet: Set<string>, blind: boolean): ReadingView {
   return {
     id: r.id,
