@@ -1,12 +1,12 @@
 import { randomUUID } from "node:crypto";
-import { mkdirSync, existsSync, statSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import type { Knex } from "knex";
 import { insertClip, insertSteps, listClipsOfRun, updateClip } from "../lib/clips/queries";
 import { clipObjectKey, STEPS } from "../lib/clips/rules";
 import { enqueue } from "../lib/jobs";
 import { putObjectFile } from "../lib/storage";
-import { renderSyntheticClip } from "../scripts/clips/synth-clip";
+import { renderSyntheticClip, type Truth } from "../scripts/clips/synth-clip";
 
 // Demo recordings: synthetic clips whose drops take a known time (near the demo edition's 135 s
 // minimum), attached to the demo runs and processed by the real worker. Rendered once, in the
@@ -19,9 +19,15 @@ const DEMO_CLIPS = [
 export async function seedDemoClips(knex: Knex, dataDir: string, log: (s: string) => void): Promise<void> {
   const technician = await knex("users").where({ email: "technician@marrowfield.test" }).first("id");
   mkdirSync(dataDir, { recursive: true });
+  const toPlace: [runId: string, clipId: string, truthFile: string][] = [];
   for (const c of DEMO_CLIPS) {
     const run = await knex("runs as r").join("samples as x", "x.id", "r.sample_id").where("x.serial", c.serial).first("r.id");
-    if (!run || (await listClipsOfRun(knex, run.id)).length > 0) continue;
+    if (!run) continue;
+    const existing = await listClipsOfRun(knex, run.id);
+    if (existing.length > 0) {
+      toPlace.push([run.id, existing[0].id, `${path.join(dataDir, `${c.serial}.mp4`)}.truth.json`]);
+      continue;
+    }
     const file = path.join(dataDir, `${c.serial}.mp4`);
     if (!existsSync(file)) {
       log(`rendering the demo recording of ${c.serial} (about a minute)…`);
@@ -36,5 +42,29 @@ export async function seedDemoClips(knex: Knex, dataDir: string, log: (s: string
     await insertSteps(knex, id, STEPS);
     await enqueue("clipVerify", { clipId: id });
     log(`demo recording of ${c.serial} uploaded; the worker is processing it`);
+    toPlace.push([run.id, id, `${file}.truth.json`]);
   }
+  for (const [runId, clipId, truthFile] of toPlace) await placeDemoDrops(knex, runId, clipId, truthFile, technician.id, log);
+}
+
+/**
+ * Once the worker has made the clip ready, the technician's placements: each drop a second before
+ * its true dispense, as a technician would jot it down while filming.
+ */
+async function placeDemoDrops(knex: Knex, runId: string, clipId: string, truthFile: string, placedBy: string, log: (s: string) => void): Promise<void> {
+  if (!existsSync(truthFile)) return;
+  for (let waited = 0; ; waited += 2) {
+    const clip = await knex("clips").where({ id: clipId }).first("status");
+    if (clip.status === "ready") break;
+    if (clip.status !== "processing" || waited > 3600) return;
+    await new Promise((r) => setTimeout(r, 2000));
+  }
+  const truth = JSON.parse(readFileSync(truthFile, "utf8")) as Truth;
+  const drops = await knex("drops").where({ run_id: runId }).whereNull("clip_id").orderBy("ordinal").select("id", "ordinal");
+  for (const d of drops) {
+    const t = truth.drops[d.ordinal - 1];
+    if (!t) continue;
+    await knex("drops").where({ id: d.id }).update({ clip_id: clipId, start_frame: Math.max(0, t.dispenseFrame - 30), placed_by: placedBy, placed_at: knex.fn.now() });
+  }
+  if (drops.length) log(`demo drops placed on their recording; reviewers find them in the reading queue`);
 }

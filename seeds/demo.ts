@@ -12,6 +12,8 @@ export const DEMO_ORGANISATIONS = [{ name: "Tallowby Ball Works (invented)" }];
 export const DEMO_USERS = [
   { email: "technician@marrowfield.test", name: "Demo Technician", roles: ["technician"] },
   { email: "reviewer@marrowfield.test", name: "Demo Reviewer", roles: ["reviewer"] },
+  // A second reader, so every drop can get its blind second reading in the demo.
+  { email: "reviewer2@marrowfield.test", name: "Demo Second Reviewer", roles: ["reviewer"] },
   { email: "lead@marrowfield.test", name: "Demo Lead", roles: ["lead", "reviewer"] },
   { email: "maker@tallowby.test", name: "Demo Manufacturer", roles: ["manufacturer"], organisation: "Tallowby Ball Works (invented)" },
 ] as const;
