@@ -1,11 +1,8 @@
-import { randomUUID } from "node:crypto";
-import { existsSync, mkdirSync, readFileSync, statSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import type { Knex } from "knex";
-import { insertClip, insertSteps, listClipsOfRun, updateClip } from "../lib/clips/queries";
-import { clipObjectKey, STEPS } from "../lib/clips/rules";
-import { enqueue } from "../lib/jobs";
-import { putObjectFile } from "../lib/storage";
+import { listClipsOfRun } from "../lib/clips/queries";
+import { clipSettled, ingestClipFile } from "../scripts/clips/ingest";
 import { renderSyntheticClip, type Truth } from "../scripts/clips/synth-clip";
 
 // Demo recordings: synthetic clips whose drops take a known time (near the demo edition's 135 s
@@ -33,14 +30,7 @@ export async function seedDemoClips(knex: Knex, dataDir: string, log: (s: string
       log(`rendering the demo recording of ${c.serial} (about a minute)…`);
       await renderSyntheticClip({ out: file, fps: c.fps, seed: c.seed, drops: 3, durations: c.durations, length: 3 * 175, width: 640, height: 360, noise: 8 });
     }
-    const id = randomUUID();
-    const key = clipObjectKey(id, "original");
-    await putObjectFile(key, file, "video/mp4");
-    const size = statSync(file).size;
-    await insertClip(knex, { id, runId: run.id, originalName: `demo-${c.serial}.mp4`, declaredType: "video/mp4", declaredSize: size, objectKey: key, uploadedBy: technician.id });
-    await updateClip(knex, id, { status: "processing", storedSize: size, uploadedAt: new Date() });
-    await insertSteps(knex, id, STEPS);
-    await enqueue("clipVerify", { clipId: id });
+    const id = await ingestClipFile(knex, run.id, file, technician.id, `demo-${c.serial}.mp4`);
     log(`demo recording of ${c.serial} uploaded; the worker is processing it`);
     toPlace.push([run.id, id, `${file}.truth.json`]);
   }
@@ -53,12 +43,7 @@ export async function seedDemoClips(knex: Knex, dataDir: string, log: (s: string
  */
 async function placeDemoDrops(knex: Knex, runId: string, clipId: string, truthFile: string, placedBy: string, log: (s: string) => void): Promise<void> {
   if (!existsSync(truthFile)) return;
-  for (let waited = 0; ; waited += 2) {
-    const clip = await knex("clips").where({ id: clipId }).first("status");
-    if (clip.status === "ready") break;
-    if (clip.status !== "processing" || waited > 3600) return;
-    await new Promise((r) => setTimeout(r, 2000));
-  }
+  if ((await clipSettled(knex, clipId)) !== "ready") return;
   const truth = JSON.parse(readFileSync(truthFile, "utf8")) as Truth;
   const drops = await knex("drops").where({ run_id: runId }).whereNull("clip_id").orderBy("ordinal").select("id", "ordinal");
   for (const d of drops) {

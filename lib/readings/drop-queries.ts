@@ -26,6 +26,8 @@ export interface DropRow {
   submissionReference: string;
   organisationId: string;
   readingToleranceS: number;
+  /** The clip's time base, once it has a frame index. */
+  timeBase: { num: number; den: number } | null;
 }
 
 function toDrop(r: Record<string, any>): DropRow {
@@ -53,6 +55,7 @@ function toDrop(r: Record<string, any>): DropRow {
     submissionReference: r.submission_reference,
     organisationId: r.organisation_id,
     readingToleranceS: r.reading_tolerance_s,
+    timeBase: r.time_base_den ? { num: Number(r.time_base_num), den: Number(r.time_base_den) } : null,
   };
 }
 
@@ -64,18 +67,29 @@ const base = (q: Db) =>
     .join("specification_editions as e", "e.id", "sub.edition_id")
     .leftJoin("clips as c", "c.id", "d.clip_id")
     .leftJoin("users as p", "p.id", "d.placed_by")
+    .leftJoin("frame_indexes as fi", "fi.clip_id", "d.clip_id")
     .select(
       "d.*",
       "c.original_name as clip_name", "c.status as clip_status", "c.reject_reason as clip_reject_reason",
       "s.id as sample_id", "s.serial as sample_serial",
       "sub.id as submission_id", "sub.reference as submission_reference", "sub.organisation_id",
-      "e.reading_tolerance_s", "p.name as placed_by_name",
+      "e.reading_tolerance_s", "p.name as placed_by_name", "fi.time_base_num", "fi.time_base_den",
     );
 
+// Every change to a drop's readings locks the drop row first (only that row: `for update of d`).
 export async function findDrop(q: Db, id: string, opts: { lock?: boolean } = {}): Promise<DropRow | undefined> {
-  // Lock the drop row alone: every change to a drop's readings takes this lock first.
-  if (opts.lock) await q("drops").where({ id }).forUpdate().first("id");
-  const r = await base(q).where("d.id", id).first();
+  const query = base(q).where("d.id", id).first();
+  if (opts.lock) query.forUpdate("d");
+  const r = await query;
+  return r ? toDrop(r) : undefined;
+}
+
+/** The drop a reading belongs to, locked, in one round trip. */
+export async function findDropOfReadingForUpdate(q: Db, readingId: string): Promise<DropRow | undefined> {
+  const r = await base(q)
+    .whereRaw("d.id = (select drop_id from readings where id = ?)", [readingId])
+    .first()
+    .forUpdate("d");
   return r ? toDrop(r) : undefined;
 }
 

@@ -100,8 +100,10 @@ export async function updateDraftMarks(q: Db, id: string, m: MarkColumns): Promi
   await q("readings").where({ id, status: "draft" }).update({ ...markColumns(m), updated_at: q.fn.now() });
 }
 
-export async function markSubmitted(q: Db, id: string): Promise<void> {
-  await q("readings").where({ id, status: "draft" }).update({ status: "submitted", submitted_at: q.fn.now(), updated_at: q.fn.now() });
+/** Returns the moment recorded as submitted. */
+export async function markSubmitted(q: Db, id: string): Promise<Date> {
+  const [row] = await q("readings").where({ id, status: "draft" }).update({ status: "submitted", submitted_at: q.fn.now(), updated_at: q.fn.now() }).returning("submitted_at");
+  return row.submitted_at;
 }
 
 export async function deleteDraft(q: Db, id: string): Promise<void> {

@@ -3,7 +3,7 @@ import { recordChange } from "../audit/record";
 import { findFrameIndex } from "../clips/index-queries";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
-import { findDrop, updateDropOutcome, type DropRow } from "./drop-queries";
+import { findDrop, findDropOfReadingForUpdate, updateDropOutcome, type DropRow } from "./drop-queries";
 import { assertCanSeeDrops, assertReviewer, canSeeReading, isBlindFor } from "./policy";
 import { deleteDraft, findReading, insertReading, listReadingsOfDrop, markSubmitted, updateDraftMarks, type ReadingRow } from "./queries";
 import { currentReadings, dropOutcome, marksFrom, supersededIds, type Marks } from "./rules";
@@ -22,10 +22,15 @@ async function lockedDrop(actor: Actor, q: Db, dropId: string): Promise<DropRow>
   return drop;
 }
 
-/** The clip must still be fit to read: ready, with its index. Returns the marks looked up in it. */
-async function lookUpMarks(q: Db, drop: DropRow, clipId: string, dispenseFrame: number | null, clearFrame: number | null): Promise<Marks> {
+/** The clip must still be fit to read: the drop's own clip, and ready. */
+function assertReadable(drop: DropRow, clipId: string): void {
   if (drop.clipStatus === "rejected" && drop.clipId === clipId) throw new AppError("conflict", `The clip was rejected (${drop.clipRejectReason ?? "no reason recorded"}); no marks can be made on it.`);
-  if (drop.clipStatus !== "ready" || drop.clipId !== clipId) throw new AppError("conflict", "The clip of this drop is not ready for reading.");
+  if (drop.clipStatus !== "ready" || drop.clipId !== clipId || !drop.timeBase) throw new AppError("conflict", "The clip of this drop is not ready for reading.");
+}
+
+/** Looks the marks up in the clip's frame index, once the clip is known to be fit to read. */
+async function lookUpMarks(q: Db, drop: DropRow, clipId: string, dispenseFrame: number | null, clearFrame: number | null): Promise<Marks> {
+  assertReadable(drop, clipId);
   const index = await findFrameIndex(q, clipId);
   if (!index) throw new AppError("conflict", "The clip of this drop has no frame index yet.");
   const m = marksFrom(index, dispenseFrame, clearFrame);
@@ -88,30 +93,38 @@ export async function saveMarks(actor: Actor, id: string, marks: MarksInput): Pr
 
 const BOTH_IN = "Both readings of this drop are in: it can no longer be corrected by a reader. A lead settles any disagreement by a ruling.";
 
+/**
+ * Submits the caller's draft. The hot path of reading: one locked read of the drop, one of its
+ * readings, one update, the audit record, and the drop's state only when it changes.
+ */
 export async function submitReading(actor: Actor, id: string): Promise<DropView> {
+  assertCanSeeDrops(actor);
   return db().transaction(async (trx) => {
-    const r = await ownReading(actor, trx, id);
-    const drop = await lockedDrop(actor, trx, r.dropId);
+    const drop = await findDropOfReadingForUpdate(trx, id);
+    const readings = drop ? await listReadingsOfDrop(trx, drop.id) : [];
+    const r = readings.find((x) => x.id === id);
+    if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     if (r.status !== "draft") throw new AppError("conflict", "This reading is already submitted.");
     if (r.dispenseFrame === null || r.clearFrame === null) throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
-    await lookUpMarks(trx, drop, r.clipId, r.dispenseFrame, r.clearFrame);
-    const readings = await listReadingsOfDrop(trx, r.dropId);
+    assertReadable(drop, r.clipId);
     if (r.supersedesId && currentReadings(readings).length >= 2) throw new AppError("conflict", BOTH_IN);
-    await markSubmitted(trx, id);
-    const after = await listReadingsOfDrop(trx, r.dropId);
-    const index = (await findFrameIndex(trx, r.clipId))!;
-    const o = dropOutcome(after, index.timeBase, drop.readingToleranceS);
+    // The marks were looked up in the frame index when they were saved, and an index never changes.
+    const submittedAt = await markSubmitted(trx, id);
+    const after = readings.map((x) => (x.id === id ? { ...x, status: "submitted" as const, submittedAt } : x));
+    const o = dropOutcome(after, drop.timeBase!, drop.readingToleranceS);
     const a = o.agreement;
-    await updateDropOutcome(trx, drop.id, {
+    const outcome = {
       state: o.state,
       agreedTimeS: a?.agreedValueS ?? null,
       timeDifferenceS: a?.timeDifferenceS ?? null,
       dispenseDifferenceS: a?.dispenseDifferenceS ?? null,
       clearDifferenceS: a?.clearDifferenceS ?? null,
-    });
+    };
     await recordChange(trx, actor, { action: r.supersedesId ? "reading.corrected" : "reading.submitted", entity: "reading", entityId: id, after: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame, timeS: r.timeS, supersedes: r.supersedesId } });
-    if (o.state !== drop.state) await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
-    return dropViewFor(actor, trx, r.dropId);
+    if (o.state === drop.state) return toDropView(actor, drop, after);
+    await updateDropOutcome(trx, drop.id, outcome);
+    await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
+    return toDropView(actor, { ...drop, ...outcome }, after);
   });
 }
 

@@ -123,6 +123,7 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },
+  "POST /api/dev/bench-insert": { path: "/api/dev/bench-insert", body: () => ({}), expect: signedInOnly(404) },
   "GET /api/runs/[id]/drops": { path: async () => `/api/runs/${clipRun}/drops`, expect: clipReaders(200) },
   "GET /api/drops/[id]": { path: async () => `/api/drops/${drops[0]}`, expect: clipReaders(200) },
   "PUT /api/drops/[id]/placement": { path: async () => `/api/drops/${drops[0]}/placement`, body: () => ({ clipId: readyClip, startFrame: 0 }), expect: clipEditors(200) },
