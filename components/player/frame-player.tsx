@@ -29,7 +29,7 @@ export default function FramePlayer(props: FramePlayerProps) {
   const rootRef = useRef<HTMLElement>(null);
   const surfaceRef = useRef<HTMLDivElement>(null);
   const goToRef = useRef<HTMLInputElement>(null);
-  const engine = useVideoEngine(src, poster, title);
+  const engine = useVideoEngine(src, title);
   const report = useFrameReport(props.onFrameChange);
   const { state, times, seekerRef } = useFrameSeeker(engine.video, { pts: frames.pts, timeBase: frames.timeBase, offsetPts }, initialFrame, report);
   const [view, setView] = useState<PictureView>(PLAIN_VIEW);
@@ -81,6 +81,7 @@ export default function FramePlayer(props: FramePlayerProps) {
       data-testid="frame-player"
       data-frame={state.frame ?? ""}
       data-status={state.status}
+      data-target={state.target ?? ""}
       className="space-y-3 rounded-lg border border-ink-100 bg-white p-4 shadow-sm"
     >
       {engine.error && <p role="alert" className="rounded-md border-l-4 border-bad-700 bg-bad-100 px-4 py-2 text-sm text-bad-700">{engine.error}</p>}
@@ -88,6 +89,7 @@ export default function FramePlayer(props: FramePlayerProps) {
         hostRef={engine.hostRef}
         surfaceRef={surfaceRef}
         size={engine.size}
+        poster={engine.video ? null : poster}
         view={view}
         onView={setView}
         compare={compare}

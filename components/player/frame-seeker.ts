@@ -25,6 +25,8 @@ export class FrameSeeker {
   private playing = false;
   private disposed = false;
   private followHandle: number | null = null;
+  /** The frame last proven on screen by a seek, whatever asked for it; null once playback moves on. */
+  private onScreen: number | null = null;
   private state: SeekerState = { status: "loading", frame: null, target: null };
   private readonly tolerance: number;
 
@@ -55,6 +57,7 @@ export class FrameSeeker {
     if (this.disposed || this.playing) return;
     this.pending = null;
     this.playing = true;
+    this.onScreen = null;
     this.emit({ status: "playing", frame: null, target: this.state.target });
     this.follow();
     this.video.play().catch(() => {
@@ -86,6 +89,7 @@ export class FrameSeeker {
         const target = this.pending;
         this.pending = null;
         const shown = await this.showOnce(target);
+        this.onScreen = shown;
         // A newer request or playback has taken over: this result describes nothing on screen now.
         if (this.pending !== null || this.playing) continue;
         this.emit(shown === target ? { status: "confirmed", frame: target, target } : { status: "unconfirmed", frame: null, target });
@@ -99,8 +103,8 @@ export class FrameSeeker {
   private showOnce(i: number): Promise<number | null> {
     const v = this.video;
     const t = seekTarget(this.times, i);
-    // A paused element skips a seek to the time it already shows and paints nothing new.
-    if (this.state.frame === i && v.paused && v.currentTime === t) return Promise.resolve(i);
+    // A paused element skips a seek to the time it already shows and paints nothing new: nothing to wait for.
+    if (this.onScreen === i && v.paused && !v.seeking) return Promise.resolve(i);
     return new Promise((resolve) => {
       let seeked = false;
       let early: number | null | undefined;

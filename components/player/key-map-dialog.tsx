@@ -24,7 +24,7 @@ function Rows({ rows }: { rows: { keys: string[]; label: string }[] }) {
   );
 }
 
-const GROUPS: KeyBinding["group"][] = ["Frames", "Playback", "Picture", "Help"];
+const GROUPS: KeyBinding["group"][] = ["Frames", "Picture", "Playback", "Help"];
 
 /** Every key the player answers to, the caller's included: the same list the key handler reads. */
 export function KeyMapDialog({ open, onClose, extraKeys }: { open: boolean; onClose: () => void; extraKeys: PlayerKey[] }) {
@@ -36,7 +36,7 @@ export function KeyMapDialog({ open, onClose, extraKeys }: { open: boolean; onCl
     if (!open && d.open) d.close();
   }, [open]);
   return (
-    <dialog ref={ref} onClose={onClose} aria-labelledby="player-keys-title" className="m-auto max-h-[85vh] w-[min(44rem,92vw)] overflow-auto rounded-lg border border-ink-200 bg-white p-6 text-ink-900 shadow-xl backdrop:bg-ink-900/50">
+    <dialog ref={ref} onClose={onClose} aria-labelledby="player-keys-title" className="m-auto max-h-[85vh] w-[min(64rem,94vw)] overflow-auto rounded-lg border border-ink-200 bg-white p-6 text-ink-900 shadow-xl backdrop:bg-ink-900/50">
       <div className="mb-4 flex items-start justify-between gap-4">
         <div>
           <h2 id="player-keys-title" className="text-xl font-semibold">Player keys</h2>
@@ -46,7 +46,7 @@ export function KeyMapDialog({ open, onClose, extraKeys }: { open: boolean; onCl
           Close
         </button>
       </div>
-      <div className="grid gap-5 md:grid-cols-2">
+      <div className="grid gap-5 md:grid-cols-2 lg:grid-cols-3">
         {extraKeys.length > 0 && (
           <section>
             <h3 className="mb-1 text-sm font-semibold uppercase tracking-wide text-wick-700">On this page</h3>

@@ -10,6 +10,8 @@ interface Props {
   hostRef: RefObject<HTMLDivElement | null>;
   surfaceRef: RefObject<HTMLDivElement | null>;
   size: { width: number; height: number } | null;
+  /** Shown until the first frame has loaded (as a plain image: the bucket answers it without CORS). */
+  poster?: string | null;
   view: PictureView;
   onView: (update: (v: PictureView) => PictureView) => void;
   compare: CompareMode;
@@ -62,7 +64,8 @@ export function PlayerPicture(p: Props) {
   const side = p.compare === "side" && reference !== null;
   const main = (
     <Pane key="now" ratio={ratio} view={p.view} onView={onView} caption={reference ? (p.compare === "side" || !p.showReference ? `Now: frame ${p.current ?? "—"}` : `Reference: frame ${reference.frame} (${reference.why})`) : undefined}>
-      <div ref={p.hostRef} className="absolute inset-0" />
+      {p.poster && <img src={p.poster} alt="" className="absolute inset-0 h-full w-full object-contain" />}
+      <div ref={p.hostRef} className="absolute inset-0 [&_.video-js]:absolute [&_.video-js]:inset-0 [&_.video-js]:bg-transparent [&_video]:object-contain" />
       {p.compare === "swap" && reference && <div className={p.showReference ? "absolute inset-0" : "hidden"}>{refVideo}</div>}
     </Pane>
   );

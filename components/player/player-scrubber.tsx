@@ -45,7 +45,7 @@ export function PlayerScrubber({ times, frame, marks, filmstrip, onSeek, title }
           style={{ backgroundImage: `url("${filmstrip.url}")`, backgroundSize: "100% 100%" }}
         />
       )}
-      <div className="relative h-6">
+      {marks.length > 0 && <div className="relative h-6">
         {marks.map((m) => (
           <span
             key={`${m.kind}-${m.frame}-${m.label}`}
@@ -56,7 +56,7 @@ export function PlayerScrubber({ times, frame, marks, filmstrip, onSeek, title }
             {m.label}
           </span>
         ))}
-      </div>
+      </div>}
       <div
         ref={trackRef}
         role="slider"

@@ -18,7 +18,7 @@ export interface VideoEngine {
  * video.js as the media engine inside `host`. The element is made here, not by React: video.js
  * wraps and later removes it, which React must not see. Our own controls replace video.js' bar.
  */
-export function useVideoEngine(src: string, poster: string | null | undefined, title: string) {
+export function useVideoEngine(src: string, title: string) {
   const hostRef = useRef<HTMLDivElement>(null);
   const [state, setState] = useState<VideoEngine>({ video: null, engine: null, size: null, error: null });
 
@@ -30,6 +30,8 @@ export function useVideoEngine(src: string, poster: string | null | undefined, t
     video.crossOrigin = "anonymous";
     video.playsInline = true;
     video.preload = "auto";
+    // video.js' own styles hang on this class; it copies the tag's classes to its wrapper.
+    video.className = "video-js";
     host.appendChild(video);
     const engine = videojs(video, {
       controls: false,
@@ -41,6 +43,9 @@ export function useVideoEngine(src: string, poster: string | null | undefined, t
     // Set after video.js copied the tag's attributes to its wrapper, so they stay on the element.
     video.setAttribute("data-testid", "player-video");
     video.tabIndex = -1;
+    // The player section is the landmark; a second region named "Video Player" inside it is noise.
+    engine.el().removeAttribute("role");
+    engine.el().removeAttribute("aria-label");
     const ready = () => setState({ video, engine, size: { width: video.videoWidth, height: video.videoHeight }, error: null });
     const failed = () => setState((s) => ({ ...s, error: "The recording could not be loaded in this browser." }));
     video.addEventListener("loadeddata", ready, { once: true });
@@ -58,8 +63,7 @@ export function useVideoEngine(src: string, poster: string | null | undefined, t
     const v = state.video;
     if (!v) return;
     v.setAttribute("aria-label", title);
-    if (poster) v.poster = poster;
-  }, [state.video, title, poster]);
+  }, [state.video, title]);
 
   return { hostRef, ...state };
 }
