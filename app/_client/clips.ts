@@ -34,6 +34,27 @@ export function useClip(id: string) {
   });
 }
 
+/** Every frame's pts in display order, for the player; fetched once a clip is ready (it never changes). */
+export interface FrameIndex {
+  timeBase: { num: number; den: number };
+  frameCount: number;
+  firstPts: number;
+  nominalRate: string | null;
+  averageRate: number;
+  variableRate: boolean;
+  keyframes: number[];
+  pts: number[];
+}
+
+export function useFrameIndex(clipId: string, enabled = true) {
+  return useQuery({
+    queryKey: [...CLIPS, "frames", clipId],
+    queryFn: () => fetchJson<FrameIndex>(`/api/clips/${clipId}/frames`),
+    enabled,
+    staleTime: Infinity,
+  });
+}
+
 /** After an upload starts or finishes, the run's list is asked again. */
 export function useRefreshRunClips(runId: string) {
   const qc = useQueryClient();

@@ -4,16 +4,27 @@ import path from "node:path";
 import { proxyArgs } from "../../lib/video/proxy";
 import { renderSyntheticClip } from "../clips/synth-clip";
 import { projectRoot } from "../services/service";
+import { benchPlayer } from "./player";
+
+const arg = (name: string, fallback: string) => {
+  const i = process.argv.indexOf(`--${name}`);
+  return i > 0 ? process.argv[i + 1] : fallback;
+};
 
 async function main() {
-  // `npm run bench`: the worker's frame index and proxy against the bare ffprobe/ffmpeg commands on
-  // the same generated clip, in the same run (ratios, so a busy machine affects both sides alike),
-  // and the worker's peak memory. Options: --minutes N (default 30), --size WxH (default 1920x1080),
+  // `npm run bench` runs both parts; `-- --only worker` or `-- --only player` one of them.
+  // The player part: --player-seconds N (default 25) of 1080p at 30 fps.
+  const only = arg("only", "all");
+  if (!["all", "worker", "player"].includes(only)) throw new Error(`--only takes worker or player, not ${only}`);
+  if (only !== "player") await benchWorker();
+  if (only !== "worker") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080 });
+}
+
+async function benchWorker() {
+  // The worker's frame index and proxy against the bare ffprobe/ffmpeg commands on the same
+  // generated clip, in the same run (ratios, so a busy machine affects both sides alike), and the
+  // worker's peak memory. Options: --minutes N (default 30), --size WxH (default 1920x1080),
   // --rounds N (default 3), --skip-proxy. The generated clip is kept in .data/bench for the next run.
-  const arg = (name: string, fallback: string) => {
-    const i = process.argv.indexOf(`--${name}`);
-    return i > 0 ? process.argv[i + 1] : fallback;
-  };
   const minutes = Number(arg("minutes", "30"));
   const [width, height] = arg("size", "1920x1080").split("x").map(Number);
   const skipProxy = process.argv.includes("--skip-proxy");

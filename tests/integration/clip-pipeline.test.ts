@@ -6,8 +6,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/lib/db";
 import { listOrganisations } from "@/lib/organisations/queries";
 import { readFrameCodes } from "@/lib/video/read-frame-codes";
-import { renderSyntheticClip, type SynthOptions } from "@/scripts/clips/synth-clip";
+import { renderSyntheticClip } from "@/scripts/clips/synth-clip";
 import { signedIn, type Client } from "../helpers/app";
+import { CLIP_VARIANTS, variantFile } from "../helpers/clip-variants";
 import { uploadFile, waitForClip } from "../helpers/clips";
 import { demo } from "../helpers/fixtures";
 import { newRun, newSample, newSubmission } from "../helpers/intake";
@@ -39,25 +40,10 @@ function ffprobeFrameTimes(file: string, container: string): number[] {
   return container === "avi" ? times.sort((a, b) => a - b) : times;
 }
 
-const VARIANTS: [string, Partial<SynthOptions>][] = [
-  ["24 fps mp4", { fps: "24" }],
-  ["25 fps mp4", { fps: "25" }],
-  ["29.97 fps mp4", { fps: "30000/1001" }],
-  ["30 fps mp4", { fps: "30" }],
-  ["60 fps mp4", { fps: "60" }],
-  ["variable frame rate", { vfr: true }],
-  ["B-frames", { bframes: true }],
-  ["first timestamp 10.5 s", { start: 10.5 }],
-  ["Matroska", { container: "mkv" }],
-  ["AVI", { container: "avi" }],
-  ["MPEG-TS", { container: "ts" }],
-  ["MPEG-TS, 29.97, VFR, B-frames, start 3 s", { container: "ts", fps: "30000/1001", vfr: true, bframes: true, start: 3 }],
-];
-
 describe("clip processing for every kind of recording", () => {
-  for (const [name, opts] of VARIANTS) {
+  for (const [name, opts] of CLIP_VARIANTS) {
     it(`${name}: index equals the decoded frame times, and the steppable frames carry their codes in order`, { timeout: 120_000 }, async () => {
-      const { file, truth } = await renderSyntheticClip({ width: 320, height: 180, length: 3, drops: 1, noise: 4, ...opts, out: path.join(dir, `${name.replace(/\W+/g, "-")}.${opts.container ?? "mp4"}`) });
+      const { file, truth } = await renderSyntheticClip({ width: 320, height: 180, length: 3, drops: 1, noise: 4, ...opts, out: path.join(dir, variantFile(name, opts)) });
       const clip = await waitForClip(tech, (await uploadFile(tech, runId, file)).clipId);
       expect(clip.status, clip.rejectReason ?? "").toBe("ready");
       const index = await (await tech.get(`/api/clips/${clip.id}/frames`)).json();

@@ -1,18 +1,34 @@
-import type { ClipView } from "@/app/_client/clips";
+"use client";
 
-/** Poster, filmstrip and a plain preview. Frame-exact stepping is the player's job, not this one's. */
+import { FramePlayer } from "@/components/player/lazy-frame-player";
+import { Notice } from "@/components/ui/notice";
+import { useFrameIndex, type ClipView } from "@/app/_client/clips";
+
+/** The frame-exact player (view only, no marks), with the poster and filmstrip the worker made. */
 export function ClipMedia({ clip }: { clip: ClipView }) {
+  const index = useFrameIndex(clip.id, clip.playback !== null);
   if (!clip.posterUrl && !clip.filmstrip && !clip.playback) return null;
   return (
     <section aria-labelledby="media-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="media-heading" className="text-xl font-semibold">Pictures and preview</h2>
+      <h2 id="media-heading" className="text-xl font-semibold">Pictures and player</h2>
       {clip.playback && (
-        <figure className="space-y-1">
-          <video controls crossOrigin="anonymous" preload="metadata" src={clip.playback.url} poster={clip.posterUrl ?? undefined} aria-label={`Preview of ${clip.originalName}`} className="max-h-[32rem] w-full rounded bg-ink-900" />
-          <figcaption className="text-sm text-ink-600">
-            {clip.playback.isProxy ? "The stepping proxy: every frame of the original, with its own timestamp." : "The original file."} A plain preview: it does not step frame by frame.
-          </figcaption>
-        </figure>
+        <div className="space-y-1">
+          {index.isPending && <p className="text-ink-600" role="status">Loading the frame index…</p>}
+          {index.isError && <Notice tone="error">{index.error.message}</Notice>}
+          {index.data && (
+            <FramePlayer
+              src={clip.playback.url}
+              poster={clip.posterUrl}
+              title={clip.originalName}
+              frames={index.data}
+              offsetPts={clip.playback.offsetPts}
+              filmstrip={clip.filmstrip}
+            />
+          )}
+          <p className="text-sm text-ink-600">
+            {clip.playback.isProxy ? "Playing the stepping proxy: every frame of the original, with its own timestamp." : "Playing the original file."} Each frame number shown has been matched to the frame index.
+          </p>
+        </div>
       )}
       <div className="grid gap-4 md:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
         {clip.posterUrl && (
