@@ -26,9 +26,10 @@ export function useRunClips(runId: string) {
 }
 
 /** One clip; polled while it is uploading or being processed. */
-export function useClip(id: string) {
+export function useClip(id: string, enabled = true) {
   return useQuery({
     queryKey: clipKey(id),
+    enabled,
     queryFn: () => fetchJson<{ clip: ClipView }>(`/api/clips/${id}`).then((r) => r.clip),
     refetchInterval: (q) => (inProgress(q.state.data?.status) ? POLL_MS : false),
   });

@@ -4,7 +4,6 @@ import { useMemo, useRef, useState } from "react";
 import { useClip, useFrameIndex } from "@/app/_client/clips";
 import { useDrop, useSaveMarks, type DropView } from "@/app/_client/drops";
 import { FramePlayer, type FrameChange, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
-import { Caution } from "@/components/shell/caution";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { DropHeader } from "./drop-header";
@@ -26,7 +25,7 @@ function marksOf(drop: DropView): PlayerMark[] {
 export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
   const q = useDrop(id);
   const clipId = q.data?.clip?.id ?? "";
-  const clip = useClip(clipId || "none");
+  const clip = useClip(clipId, Boolean(clipId));
   const frames = useFrameIndex(clipId, Boolean(clipId) && q.data?.clip?.status === "ready");
   const [seen, setSeen] = useState<FrameChange>({ frame: null, confirmed: false });
   const control = useRef<FramePlayerControl>(null);
@@ -87,7 +86,6 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
         <aside aria-label="Your reading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
           <h2 className="text-xl font-semibold">Your reading</h2>
           {canRead ? <MarkPanel drop={d} onJump={jump} /> : <p className="text-sm text-ink-700">Only reviewers read drops.</p>}
-          <Caution compact />
         </aside>
       </div>
       <ReadingsTable drop={d} onJump={jump} />
