@@ -20,7 +20,7 @@ export function AppShell({ user, devTools, children }: { user: ShellUser; devToo
         Skip to content
       </a>
       <header className="bg-ink-900 text-ink-50">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3">
           <Link href="/" className="flex items-center gap-2 text-lg font-bold tracking-tight">
             <Logo /> Wickmark
           </Link>
@@ -28,9 +28,10 @@ export function AppShell({ user, devTools, children }: { user: ShellUser; devToo
             <NavLinks items={navFor(user.roles, devTools)} />
           </nav>
           <div className="flex items-center gap-3 text-sm">
-            <span>
+            {/* Name over roles, so a lead with several roles leaves the navigation room for one line. */}
+            <span className="flex flex-col items-end leading-tight">
               <span className="font-semibold">{user.name}</span>
-              <span className="ml-2 text-ink-200">{user.roles.map((r) => ROLE_LABELS[r]).join(" · ")}</span>
+              <span className="text-xs text-ink-200">{user.roles.map((r) => ROLE_LABELS[r]).join(" · ")}</span>
             </span>
             <SignOutButton />
           </div>

@@ -14,6 +14,8 @@ const STAFF: Role[] = ["technician", "reviewer", "lead"];
 export const NAV_ITEMS: NavItem[] = [
   { href: "/overview", label: "Overview", roles: STAFF },
   { href: "/submissions", label: "Submissions", roles: STAFF },
+  { href: "/queue", label: "Reading queue", roles: ["reviewer"] },
+  { href: "/discrepancies", label: "Discrepancies", roles: ["lead"] },
   // Every staff member may read the editions; reviewers rarely need to, so they are not offered them here.
   { href: "/editions", label: "Editions", roles: ["lead", "technician"] },
   { href: "/organisations", label: "Organisations", roles: ["lead"] },

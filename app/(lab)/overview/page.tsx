@@ -1,5 +1,6 @@
 import { requirePageActor } from "@/lib/auth/page-guard";
 import { ROLE_LABELS, STAFF_ROLES, type Role } from "@/lib/users/rules";
+import { QueueCount } from "./_components/queue-count";
 
 export const metadata = { title: "Overview" };
 
@@ -27,6 +28,7 @@ export default async function OverviewPage() {
                 <li key={d}>{d}</li>
               ))}
             </ul>
+            {role === "reviewer" && <QueueCount />}
           </section>
         ))}
       </div>

@@ -8,5 +8,5 @@ export const metadata = { title: "Run" };
 export default async function RunPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor(STAFF_ROLES);
   const { id } = await params;
-  return <RunDetail id={id} canEdit={canEditIntake(actor)} isLead={hasRole(actor, "lead")} />;
+  return <RunDetail id={id} canEdit={canEditIntake(actor)} isLead={hasRole(actor, "lead")} isReviewer={hasRole(actor, "reviewer")} />;
 }

@@ -8,11 +8,12 @@ import { formatInstant } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
 import { useRun } from "@/app/_client/runs";
 import { AcceptForm } from "./accept-form";
+import { Drops } from "./drops";
 import { EditRun } from "./edit-run";
 import { Recordings } from "./recordings";
 import { RunConditions } from "./run-conditions";
 
-export function RunDetail({ id, canEdit, isLead }: { id: string; canEdit: boolean; isLead: boolean }) {
+export function RunDetail({ id, canEdit, isLead, isReviewer }: { id: string; canEdit: boolean; isLead: boolean; isReviewer: boolean }) {
   const q = useRun(id);
   const [editing, setEditing] = useState(false);
   if (q.isPending) return <p className="text-ink-600" role="status">Loading the run…</p>;
@@ -58,6 +59,8 @@ export function RunDetail({ id, canEdit, isLead }: { id: string; canEdit: boolea
       )}
 
       <Recordings runId={run.id} canUpload={canEdit} />
+
+      <Drops runId={run.id} canEdit={canEdit} canRead={isReviewer} />
     </div>
   );
 }
