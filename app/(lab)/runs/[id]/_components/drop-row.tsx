@@ -4,7 +4,7 @@ import Link from "next/link";
 import type { ClipView } from "@/app/_client/clips";
 import type { DropView } from "@/app/_client/drops";
 import { groupDigits } from "@/app/_client/clip-words";
-import { DropState } from "./drop-state";
+import { DropState } from "@/app/(lab)/_shared/drops/drop-state";
 import { PlaceDropForm } from "./place-drop-form";
 
 export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView; readyClips: ClipView[]; canEdit: boolean; canRead: boolean }) {
