@@ -4,6 +4,7 @@ import path from "node:path";
 import { proxyArgs } from "../../lib/video/proxy";
 import { renderSyntheticClip } from "../clips/synth-clip";
 import { projectRoot } from "../services/service";
+import { benchApi } from "./api";
 import { benchPlayer } from "./player";
 
 const arg = (name: string, fallback: string) => {
@@ -12,12 +13,23 @@ const arg = (name: string, fallback: string) => {
 };
 
 async function main() {
-  // `npm run bench` runs both parts; `-- --only worker` or `-- --only player` one of them.
-  // The player part: --player-seconds N (default 25) of 1080p at 30 fps.
+  // `npm run bench` runs every part; `-- --only worker|player|api` one of them.
+  // The player part: --player-seconds N (default 25) of 1080p at 30 fps. The API part:
+  // --connections N (default 50), --api-rounds N (default 4), --per-connection N (default 10).
   const only = arg("only", "all");
-  if (!["all", "worker", "player"].includes(only)) throw new Error(`--only takes worker or player, not ${only}`);
-  if (only !== "player") await benchWorker();
-  if (only !== "worker") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080 });
+  if (!["all", "worker", "player", "api"].includes(only)) throw new Error(`--only takes worker, player or api, not ${only}`);
+  if (only === "all" || only === "worker") await benchWorker();
+  if (only === "all" || only === "player") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080 });
+  if (only === "all" || only === "api") await reportApi();
+}
+
+async function reportApi() {
+  const r = await benchApi({ connections: Number(arg("connections", "50")), perConnection: Number(arg("per-connection", "10")), rounds: Number(arg("api-rounds", "4")) });
+  const ms = (v: number) => `${v.toFixed(1)} ms`;
+  console.log(`\nreading-submit API, ${r.connections} connections, ${r.perPhase} timed requests per phase and round:`);
+  console.log(`  submit:   median ${ms(r.submit.median)}, p95 ${ms(r.submit.p95)} (n = ${r.submit.n})`);
+  console.log(`  baseline: median ${ms(r.baseline.median)}, p95 ${ms(r.baseline.p95)} (one insert behind the same wrapper)`);
+  console.log(`  p95 ratio, median of rounds: ${r.ratioP95.toFixed(2)}× (rounds: ${r.roundRatios.map((x) => x.toFixed(2)).join(", ")}; goal ≤ 2×)`);
 }
 
 async function benchWorker() {
