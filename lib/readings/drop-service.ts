@@ -7,7 +7,7 @@ import { AppError } from "../errors";
 import { findRun } from "../runs/queries";
 import { assertLead } from "../submissions/policy";
 import { countReadingsOfDrop, findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./drop-queries";
-import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer } from "./policy";
+import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer, isReviewer } from "./policy";
 import { listReadingsOfDrop, listReadingsOfDrops } from "./queries";
 import type { PlacementInput } from "./schema";
 import { toDropView, type DropView, type QueueItem } from "./view";
@@ -48,6 +48,9 @@ export async function placeDrop(actor: Actor, id: string, p: PlacementInput): Pr
       const message = `The clip has frames 0 to ${index.frameCount - 1}; frame ${p.startFrame} is past its end.`;
       throw new AppError("validation", message, { fields: { startFrame: message } });
     }
+    // A placer who also reads drops is not told whether anyone has started reading: they may place
+    // a drop once, and moving it is left to those who do not read.
+    if (drop.clipId && isReviewer(actor)) throw new AppError("conflict", "This drop is already placed. Because you also read drops, a technician or a lead who does not read moves it.");
     if (drop.clipId && (await countReadingsOfDrop(trx, id)) > 0) throw new AppError("conflict", "Reading of this drop has begun, so it stays where it is.");
     await updatePlacement(trx, id, { ...p, placedBy: actor.id });
     await recordChange(trx, actor, { action: "drop.placed", entity: "drop", entityId: id, before: { clipId: drop.clipId, startFrame: drop.startFrame }, after: p });
@@ -65,6 +68,7 @@ export async function workQueue(actor: Actor): Promise<QueueItem[]> {
     ordinal: v.ordinal,
     runId: v.runId,
     sampleSerial: v.sampleSerial,
+    submissionId: v.submissionId,
     submissionReference: v.submissionReference,
     clipName: v.clip!.name,
     startFrame: v.startFrame!,

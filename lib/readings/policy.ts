@@ -21,8 +21,12 @@ export function assertCanSeeDrops(actor: Actor): void {
   if (!isStaff(actor)) throw new AppError("not_found", "No such drop.");
 }
 
+export function isReviewer(actor: Actor): boolean {
+  return hasRole(actor, "reviewer");
+}
+
 export function isBlindFor(actor: Actor, currentReadingCount: number): boolean {
-  return hasRole(actor, "reviewer") && currentReadingCount < 2;
+  return isReviewer(actor) && currentReadingCount < 2;
 }
 
 /** Others' readings are hidden from a blind reader exactly as a missing one would be. */

@@ -46,6 +46,8 @@ export interface DropView {
   blind: boolean;
   /** Hidden (null) from a blind reader. */
   state: DropState | null;
+  /** When the state last changed (hidden from a blind reader). */
+  stateChangedAt: string | null;
   comparison: { agreedTimeS: number | null; timeDifferenceS: number; dispenseDifferenceS: number; clearDifferenceS: number } | null;
   readings: ReadingView[];
   /** The viewer's own unfinished reading, if any. */
@@ -60,6 +62,7 @@ export interface QueueItem {
   ordinal: number;
   runId: string;
   sampleSerial: string;
+  submissionId: string;
   submissionReference: string;
   clipName: string;
   startFrame: number;
@@ -112,6 +115,7 @@ export function toDropView(actor: Actor, d: DropRow, readings: readonly ReadingR
     readingToleranceS: d.readingToleranceS,
     blind,
     state: blind ? null : d.state,
+    stateChangedAt: blind ? null : (d.stateChangedAt?.toISOString() ?? null),
     comparison: settled
       ? { agreedTimeS: d.agreedTimeS, timeDifferenceS: d.timeDifferenceS!, dispenseDifferenceS: d.dispenseDifferenceS!, clearDifferenceS: d.clearDifferenceS! }
       : null,

@@ -1,12 +1,13 @@
 "use client";
 
 import Link from "next/link";
+import { LocalTime } from "@/components/ui/local-time";
 import { Notice } from "@/components/ui/notice";
 import { useDiscrepancies, type DropView } from "@/app/_client/drops";
 import { seconds } from "@/app/_client/clip-words";
 import { countingReadings, signedSeconds } from "./reading-numbers";
 
-const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "Difference (second − first)", "Tolerance"];
+const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "Difference (second − first)", "Tolerance", "Since"];
 
 function Reading({ r }: { r: DropView["readings"][number] | undefined }) {
   if (!r || r.timeS === null) return <span className="text-ink-600">—</span>;
@@ -58,6 +59,7 @@ export function DiscrepancyTable() {
                   )}
                 </td>
                 <td className="whitespace-nowrap px-3 py-2">±{seconds(d.readingToleranceS)}</td>
+                <td className="whitespace-nowrap px-3 py-2">{d.stateChangedAt ? <LocalTime iso={d.stateChangedAt} /> : "—"}</td>
               </tr>
             );
           })}

@@ -37,7 +37,7 @@ export function QueueTable() {
                     Drop {i.ordinal}<span className="sr-only"> of sample {i.sampleSerial}</span>
                   </Link>
                 </th>
-                <td className="whitespace-nowrap px-3 py-2">{i.submissionReference}</td>
+                <td className="whitespace-nowrap px-3 py-2"><Link href={`/submissions/${i.submissionId}`} className="text-wick-700 underline">{i.submissionReference}</Link></td>
                 <td className="whitespace-nowrap px-3 py-2">{i.sampleSerial}</td>
                 <td className="break-all px-3 py-2">{i.clipName}</td>
                 <td className="whitespace-nowrap px-3 py-2">{groupDigits(i.startFrame)}</td>
