@@ -157,6 +157,15 @@ describe("drop placement", () => {
     expect(reviewerTry.status).toBe(403);
   }, 60_000);
 
+  it("a placer who also reads may not move a placed drop, whether or not reading has begun", async () => {
+    const r = await placedDrops(tech);
+    await mark(a, r.dropIds[0], { dispenseFrame: 1 });
+    const move = (dropId: string) => lead.request("PUT", `/api/drops/${dropId}/placement`, { json: { clipId: r.clipId, startFrame: 2 } });
+    const [read, unread] = [await json(await move(r.dropIds[0]), 409), await json(await move(r.dropIds[1]), 409)];
+    expect(read.error.message).toBe(unread.error.message);
+    expect(read.error.message).toMatch(/Because you also read drops/);
+  }, 60_000);
+
   it("refuses a drop that is not placed yet", async () => {
     const r = await placedDrops(tech);
     const unplaced = (await db()("drops").insert({ run_id: r.runId, ordinal: 9 }).returning("id"))[0].id;
