@@ -12,7 +12,7 @@ export function ReadingsTable({ drop, onJump }: { drop: DropView; onJump: (frame
     );
   return (
     <section aria-labelledby="readings-heading" className="space-y-3 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="readings-heading" className="text-xl font-semibold">{drop.blind ? "Your reading" : "Readings"}</h2>
+      <h2 id="readings-heading" className="text-xl font-semibold">{drop.blind ? "Your reading's history" : "Readings"}</h2>
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <thead className="border-b border-ink-100 text-ink-600">

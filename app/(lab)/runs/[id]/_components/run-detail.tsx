@@ -26,7 +26,7 @@ export function RunDetail({ id, canEdit, isLead, isReviewer }: { id: string; can
         <Link href={`/submissions/${run.submissionId}`} className="text-sm font-semibold text-wick-700 underline">Back to the submission</Link>
         <p className="mt-2 text-sm font-semibold uppercase tracking-wide text-wick-700">Sample {run.sampleSerial}</p>
         <h1 className="text-3xl font-bold">Run tested {formatInstant(run.testedAt)}</h1>
-        <p className="mt-1 text-ink-600">Recorded by {run.technicianName} · {run.dropCount} drop{run.dropCount === 1 ? "" : "s"} to place on clips</p>
+        <p className="mt-1 text-ink-600">Recorded by {run.technicianName} · {run.dropCount} drop{run.dropCount === 1 ? "" : "s"}</p>
       </div>
 
       <section aria-labelledby="warnings-heading" className="space-y-3">
