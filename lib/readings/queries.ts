@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import type { Marks } from "./rules";
 
 export interface ReadingRow {
   id: string;
@@ -64,15 +65,7 @@ export async function listReadingsOfDrops(q: Db, dropIds: string[]): Promise<Rea
   return (await base(q).whereIn("g.drop_id", dropIds).orderBy("g.created_at")).map(toReading);
 }
 
-export interface MarkColumns {
-  dispenseFrame: number | null;
-  clearFrame: number | null;
-  dispensePts: number | null;
-  clearPts: number | null;
-  timeS: number | null;
-  uncertaintyStandardS: number | null;
-  uncertaintyExpandedS: number | null;
-}
+export type MarkColumns = Marks;
 
 function markColumns(m: MarkColumns) {
   return {
