@@ -82,11 +82,12 @@ function markColumns(m: MarkColumns) {
 export async function insertReading(
   q: Db,
   r: { dropId: string; clipId: string; reviewerId: string; slot: number; supersedesId: string | null; correctionReason: string | null } & MarkColumns,
-): Promise<string> {
+  reviewerName = "",
+): Promise<ReadingRow> {
   const [row] = await q("readings")
     .insert({ drop_id: r.dropId, clip_id: r.clipId, reviewer_id: r.reviewerId, slot: r.slot, supersedes_id: r.supersedesId, correction_reason: r.correctionReason, ...markColumns(r) })
-    .returning("id");
-  return row.id;
+    .returning("*");
+  return toReading({ ...row, reviewer_name: reviewerName });
 }
 
 export async function updateDraftMarks(q: Db, id: string, m: MarkColumns): Promise<void> {

@@ -61,7 +61,7 @@ export async function startReading(actor: Actor, dropId: string, marks: MarksInp
     if (heads.length >= 2 || !["unread", "read once"].includes(drop.state)) throw new AppError("conflict", "This drop already has its two readers.");
     const m = await lookUpMarks(trx, drop, drop.clipId, marks.dispenseFrame ?? null, marks.clearFrame ?? null);
     const slot = heads.some((r) => r.slot === 1) ? 2 : 1;
-    const id = await insertReading(trx, { dropId, clipId: drop.clipId, reviewerId: actor.id, slot, supersedesId: null, correctionReason: null, ...m });
+    const { id } = await insertReading(trx, { dropId, clipId: drop.clipId, reviewerId: actor.id, slot, supersedesId: null, correctionReason: null, ...m });
     await recordChange(trx, actor, { action: "reading.started", entity: "reading", entityId: id, after: { dropId, slot } });
     return dropViewFor(actor, trx, dropId);
   });
@@ -132,18 +132,22 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
 export async function correctReading(actor: Actor, id: string, reason: string): Promise<DropView> {
   assertReviewer(actor, "correct readings");
   return db().transaction(async (trx) => {
-    const r = await ownReading(actor, trx, id);
-    const drop = await lockedDrop(actor, trx, r.dropId);
-    const readings = await listReadingsOfDrop(trx, r.dropId);
+    const drop = await findDropOfReadingForUpdate(trx, id);
+    const readings = drop ? await listReadingsOfDrop(trx, drop.id) : [];
+    const r = readings.find((x) => x.id === id);
+    if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     const current = currentReadings(readings);
     if (r.status !== "submitted") throw new AppError("conflict", "This reading is still a draft: change its marks directly.");
     if (current.length >= 2) throw new AppError("conflict", BOTH_IN);
     if (!current.some((c) => c.id === r.id)) throw new AppError("conflict", "This reading was already replaced by a correction.");
     if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft")) throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");
-    const m = await lookUpMarks(trx, drop, r.clipId, r.dispenseFrame, r.clearFrame);
-    const newId = await insertReading(trx, { dropId: r.dropId, clipId: r.clipId, reviewerId: actor.id, slot: r.slot, supersedesId: r.id, correctionReason: reason, ...m });
-    await recordChange(trx, actor, { action: "reading.correction_started", entity: "reading", entityId: newId, after: { supersedes: r.id, reason } });
-    return dropViewFor(actor, trx, r.dropId);
+    assertReadable(drop, r.clipId);
+    // The draft starts from the submitted marks, already looked up in the frame index.
+    const { dispenseFrame, clearFrame, dispensePts, clearPts, timeS, uncertaintyStandardS, uncertaintyExpandedS } = r;
+    const marks = { dispenseFrame, clearFrame, dispensePts, clearPts, timeS, uncertaintyStandardS, uncertaintyExpandedS };
+    const draft = await insertReading(trx, { dropId: r.dropId, clipId: r.clipId, reviewerId: actor.id, slot: r.slot, supersedesId: r.id, correctionReason: reason, ...marks }, actor.name);
+    await recordChange(trx, actor, { action: "reading.correction_started", entity: "reading", entityId: draft.id, after: { supersedes: r.id, reason } });
+    return toDropView(actor, drop, [...readings, draft]);
   });
 }
 
