@@ -13,11 +13,12 @@ const arg = (name: string, fallback: string) => {
 
 async function main() {
   // `npm run bench` runs both parts; `-- --only worker` or `-- --only player` one of them.
-  // The player part: --player-seconds N (default 25) of 1080p at 30 fps.
+  // The player part: --player-seconds N (default 25) of 1080p at 30 fps; --player-gop N builds its
+  // proxy with another keyframe interval than the worker's.
   const only = arg("only", "all");
   if (!["all", "worker", "player"].includes(only)) throw new Error(`--only takes worker or player, not ${only}`);
   if (only !== "player") await benchWorker();
-  if (only !== "worker") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080 });
+  if (only !== "worker") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080, gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined });
 }
 
 async function benchWorker() {
