@@ -8,6 +8,7 @@ import { closeDb, db } from "@/lib/db";
 import { listOrganisations } from "@/lib/organisations/queries";
 import { frameCodeGeometry, type FrameCodeGeometry } from "@/lib/video/frame-code";
 import { renderSyntheticClip } from "@/scripts/clips/synth-clip";
+import { rng } from "@/scripts/clips/synth-plan";
 import { signedIn, type Client } from "../helpers/app";
 import { APP_URL, launch, screenshot, signInAs } from "../helpers/browser";
 import { CLIP_VARIANTS, variantFile } from "../helpers/clip-variants";
@@ -54,18 +55,6 @@ afterAll(async () => {
   await browser?.close();
   await closeDb();
 });
-
-/** Seeded, so a failure can be replayed: mulberry32. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 2 ** 32;
-  };
-}
 
 interface Seen {
   status: string;
@@ -158,7 +147,8 @@ describe("frame accuracy of the player in Chromium, for every kind of recording"
         await page.keyboard.press("ArrowLeft");
         await check(from + i, "←");
       }
-      const random = seeded(20261201 + frameCount);
+      // Seeded, so a failure can be replayed.
+      const random = rng(20261201 + frameCount);
       for (let i = 0; i < RANDOM_SEEKS; i++) await go(Math.floor(random() * frameCount), `random seek ${i}`);
       await go(frameCount - 1, "last frame");
       await screenshot(page, `frame-accuracy-${name.replace(/\W+/g, "-").toLowerCase()}`);
