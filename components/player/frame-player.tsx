@@ -108,7 +108,7 @@ export default function FramePlayer(props: FramePlayerProps) {
         </div>
       )}
       <PlayerScrubber times={times} frame={shown} marks={marks} filmstrip={filmstrip} onSeek={(f) => seekerRef.current?.seek(f)} title={title} />
-      <PlayerReadout status={state.status} frame={shown} frameCount={times.length} times={times} pts={frames.pts} timeBase={frames.timeBase} nominalRate={frames.nominalRate} dispenseFrame={dispense} />
+      <PlayerReadout status={state.status} frame={shown} frameCount={times.length} times={times} pts={frames.pts} timeBase={frames.timeBase} nominalRate={frames.variableRate ? null : frames.nominalRate} dispenseFrame={dispense} />
       <PlayerControls
         actions={actions}
         playing={state.status === "playing"}

@@ -89,7 +89,8 @@ export class FrameSeeker {
         const target = this.pending;
         this.pending = null;
         const shown = await this.showOnce(target);
-        this.onScreen = shown;
+        // Playback that began meanwhile has moved the picture on.
+        this.onScreen = this.playing ? null : shown;
         // A newer request or playback has taken over: this result describes nothing on screen now.
         if (this.pending !== null || this.playing) continue;
         this.emit(shown === target ? { status: "confirmed", frame: target, target } : { status: "unconfirmed", frame: null, target });

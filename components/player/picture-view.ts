@@ -24,8 +24,11 @@ export function withZoom(v: PictureView, zoom: number): PictureView {
   return { ...v, zoom: z, centerX: clamp(v.centerX, -reach(z), reach(z)), centerY: clamp(v.centerY, -reach(z), reach(z)) };
 }
 
-/** Zoom steps by a factor of √2, so four presses double twice (1 → 2 → 4). */
-export const zoomStep = (v: PictureView, direction: 1 | -1) => withZoom(v, Math.round(v.zoom * Math.SQRT2 ** direction * 100) / 100);
+/** Zoom moves along the powers of √2 (1, 1.41, 2, 2.83, 4…), so two presses double it from wherever the slider left it. */
+export function zoomStep(v: PictureView, direction: 1 | -1): PictureView {
+  const rung = Math.round(Math.log(v.zoom) / Math.log(Math.SQRT2));
+  return withZoom(v, Math.round(Math.SQRT2 ** (rung + direction) * 100) / 100);
+}
 
 /** Move the centre by a fraction of the frame (positive: show more of the right / bottom). */
 export function panBy(v: PictureView, dx: number, dy: number): PictureView {

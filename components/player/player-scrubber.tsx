@@ -19,6 +19,20 @@ interface Props {
   title: string;
 }
 
+/** Labels closer than this (percent of the strip) go on a second row, so a drop's two marks stay readable. */
+const LABEL_GAP = 10;
+
+function placeLabels<T extends { left: number }>(items: T[]): (T & { row: 0 | 1 })[] {
+  const lastLeft = [-Infinity, -Infinity];
+  return [...items]
+    .sort((a, b) => a.left - b.left)
+    .map((it) => {
+      const row: 0 | 1 = it.left - lastLeft[0] >= LABEL_GAP || it.left - lastLeft[1] < LABEL_GAP ? 0 : 1;
+      lastLeft[row] = it.left;
+      return { ...it, row };
+    });
+}
+
 /**
  * The whole clip as a strip; position follows each frame's own time, so a variable-rate clip is
  * drawn as it plays. Dragging asks for frames as the pointer moves; the player keeps only the latest.
@@ -28,6 +42,8 @@ export function PlayerScrubber({ times, frame, marks, filmstrip, onSeek, title }
   const last = times.length - 1;
   const span = last > 0 ? times[last] - times[0] : 1;
   const at = (f: number) => (last > 0 ? ((times[f] - times[0]) / span) * 100 : 0);
+
+  const labels = placeLabels(marks.map((m) => ({ mark: m, left: at(Math.max(0, Math.min(last, m.frame))) })));
 
   const seekToPointer = (e: PointerEvent<HTMLDivElement>) => {
     const box = trackRef.current?.getBoundingClientRect();
@@ -45,18 +61,20 @@ export function PlayerScrubber({ times, frame, marks, filmstrip, onSeek, title }
           style={{ backgroundImage: `url("${filmstrip.url}")`, backgroundSize: "100% 100%" }}
         />
       )}
-      {marks.length > 0 && <div className="relative h-6">
-        {marks.map((m) => (
-          <span
-            key={`${m.kind}-${m.frame}-${m.label}`}
-            title={`${m.label}: frame ${m.frame}`}
-            className={`absolute top-0 -translate-x-1/2 whitespace-nowrap rounded-sm px-1 text-[0.7rem] font-semibold leading-5 ${MARK_TONE[m.kind]}`}
-            style={{ left: `${at(Math.max(0, Math.min(last, m.frame)))}%` }}
-          >
-            {m.label}
-          </span>
-        ))}
-      </div>}
+      {marks.length > 0 && (
+        <div className={`relative ${labels.some((l) => l.row === 1) ? "h-11" : "h-6"}`}>
+          {labels.map(({ mark: m, left, row }) => (
+            <span
+              key={`${m.kind}-${m.frame}-${m.label}`}
+              title={`${m.label}: frame ${m.frame}`}
+              className={`absolute whitespace-nowrap rounded-sm px-1 text-[0.7rem] font-semibold leading-5 ${MARK_TONE[m.kind]} ${left < 6 ? "" : left > 94 ? "-translate-x-full" : "-translate-x-1/2"}`}
+              style={{ left: `${left}%`, top: row ? "1.25rem" : 0 }}
+            >
+              {m.label}
+            </span>
+          ))}
+        </div>
+      )}
       <div
         ref={trackRef}
         role="slider"

@@ -13,6 +13,8 @@ export interface PlayerFrames {
   pts: number[];
   timeBase: { num: number; den: number };
   nominalRate: string | null;
+  /** A variable-rate clip has no meaningful timecode: frames are not counted at the nominal rate. */
+  variableRate?: boolean;
   keyframes?: number[];
 }
 

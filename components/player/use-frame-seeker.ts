@@ -24,8 +24,11 @@ export function useFrameSeeker(
   useEffect(() => {
     listener.current = onState;
   }, [onState]);
-  // Read once: moving the opening frame later is the caller's goToFrame, not a new seeker.
+  // Where to open, until the seeker exists; after that a move is the caller's seek, not a new seeker.
   const opening = useRef(initialFrame);
+  useEffect(() => {
+    if (!seekerRef.current) opening.current = initialFrame;
+  }, [initialFrame]);
 
   useEffect(() => {
     if (!video || times.length === 0) return;

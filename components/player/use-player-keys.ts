@@ -38,7 +38,8 @@ export function usePlayerKeys(root: RefObject<HTMLElement | null>, actions: Reco
         return;
       }
       const action = actionFor(e);
-      if (!action) return;
+      // Behind the open key map only its own key (and the dialog's Escape) should do anything.
+      if (!action || (target?.closest("dialog") && action !== "keyMap")) return;
       e.preventDefault();
       latest.current.actions[action]();
     };

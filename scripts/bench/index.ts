@@ -14,12 +14,13 @@ const arg = (name: string, fallback: string) => {
 
 async function main() {
   // `npm run bench` runs every part; `-- --only worker|player|api` one of them.
-  // The player part: --player-seconds N (default 25) of 1080p at 30 fps. The API part:
+  // The player part: --player-seconds N (default 25) of 1080p at 30 fps; --player-gop N builds its
+  // proxy with another keyframe interval than the worker's. The API part:
   // --connections N (default 50), --api-rounds N (default 4), --per-connection N (default 10).
   const only = arg("only", "all");
   if (!["all", "worker", "player", "api"].includes(only)) throw new Error(`--only takes worker, player or api, not ${only}`);
   if (only === "all" || only === "worker") await benchWorker();
-  if (only === "all" || only === "player") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080 });
+  if (only === "all" || only === "player") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080, gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined });
   if (only === "all" || only === "api") await reportApi();
 }
 

@@ -49,8 +49,11 @@ describe("player keys", () => {
 });
 
 describe("picture zoom, position and tone", () => {
-  it("zooms from 1× to 8× and no further", () => {
+  it("zooms from 1× to 8× and no further, doubling every two steps", () => {
     let v = PLAIN_VIEW;
+    for (let i = 0; i < 4; i++) v = zoomStep(v, 1);
+    expect(v.zoom).toBe(4);
+    expect(zoomStep(zoomStep(v, -1), -1).zoom).toBe(2);
     for (let i = 0; i < 10; i++) v = zoomStep(v, 1);
     expect(v.zoom).toBe(8);
     expect(withZoom(PLAIN_VIEW, 0.5).zoom).toBe(1);
