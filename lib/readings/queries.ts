@@ -1,7 +1,7 @@
 import type { Db } from "../db";
 import type { Marks } from "./rules";
 
-export interface ReadingRow {
+export interface ReadingRow extends Marks {
   id: string;
   dropId: string;
   clipId: string;
@@ -9,13 +9,6 @@ export interface ReadingRow {
   reviewerName: string;
   slot: number;
   status: "draft" | "submitted";
-  dispenseFrame: number | null;
-  clearFrame: number | null;
-  dispensePts: number | null;
-  clearPts: number | null;
-  timeS: number | null;
-  uncertaintyStandardS: number | null;
-  uncertaintyExpandedS: number | null;
   supersedesId: string | null;
   correctionReason: string | null;
   createdAt: Date;
