@@ -1,0 +1,249 @@
+// Special functions and distributions the tolerance factors and outlier tests are built on.
+// Written out here because the noncentral t is in no installed library, and the tests need
+// more digits than the usual closed-form approximations give.
+import { probit } from "simple-statistics";
+
+const EPS = 1e-15;
+const TINY = 1e-300;
+const MAX_ITERATIONS = 10_000;
+
+// Lanczos approximation, g = 7, nine coefficients (Godfrey), relative error about 1e-15.
+const LANCZOS = [
+  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905,
+  -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
+];
+
+/** ln Γ(x) for x > 0. */
+export function logGamma(x: number): number {
+  if (!(x > 0)) throw new Error("The log-gamma function is only used here for positive arguments");
+  // Reflection Γ(x)Γ(1−x) = π/sin(πx) keeps the series on x ≥ 0.5, where it is accurate.
+  if (x < 0.5) return Math.log(Math.PI / Math.sin(Math.PI * x)) - logGamma(1 - x);
+  const z = x - 1;
+  let a = LANCZOS[0];
+  for (let i = 1; i < LANCZOS.length; i++) a += LANCZOS[i] / (z + i);
+  const t = z + 7.5;
+  return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(a);
+}
+
+/** ln B(a, b) = ln Γ(a) + ln Γ(b) − ln Γ(a + b). */
+export function logBeta(a: number, b: number): number {
+  return logGamma(a) + logGamma(b) - logGamma(a + b);
+}
+
+// Continued fraction for I_x(a, b), modified Lentz method (Numerical Recipes §6.4, betacf).
+function betaContinuedFraction(x: number, a: number, b: number): number {
+  let c = 1;
+  let d = 1 - ((a + b) * x) / (a + 1);
+  if (Math.abs(d) < TINY) d = TINY;
+  d = 1 / d;
+  let h = d;
+  for (let m = 1; m <= MAX_ITERATIONS; m++) {
+    const m2 = 2 * m;
+    let aa = (m * (b - m) * x) / ((a + m2 - 1) * (a + m2));
+    d = 1 + aa * d;
+    if (Math.abs(d) < TINY) d = TINY;
+    c = 1 + aa / c;
+    if (Math.abs(c) < TINY) c = TINY;
+    d = 1 / d;
+    h *= d * c;
+    aa = (-(a + m) * (a + b + m) * x) / ((a + m2) * (a + m2 + 1));
+    d = 1 + aa * d;
+    if (Math.abs(d) < TINY) d = TINY;
+    c = 1 + aa / c;
+    if (Math.abs(c) < TINY) c = TINY;
+    d = 1 / d;
+    const del = d * c;
+    h *= del;
+    if (Math.abs(del - 1) < EPS) return h;
+  }
+  throw new Error("The incomplete beta continued fraction did not converge");
+}
+
+/** Regularized incomplete beta I_x(a, b) (Numerical Recipes §6.4, betai). */
+export function regularizedBeta(x: number, a: number, b: number): number {
+  if (!(a > 0 && b > 0)) throw new Error("The incomplete beta function needs positive parameters");
+  if (!(x >= 0 && x <= 1)) throw new Error("The incomplete beta function needs x between 0 and 1");
+  if (x === 0 || x === 1) return x;
+  const front = Math.exp(a * Math.log(x) + b * Math.log1p(-x) - logBeta(a, b));
+  // The fraction converges fast on the side of the mean (a+1)/(a+b+2); use symmetry on the other.
+  if (x < (a + 1) / (a + b + 2)) return (front * betaContinuedFraction(x, a, b)) / a;
+  return 1 - (front * betaContinuedFraction(1 - x, b, a)) / b;
+}
+
+// Regularized upper incomplete gamma Q(a, x): series or Lentz continued fraction (Numerical Recipes §6.2).
+function upperGamma(a: number, x: number): number {
+  if (x <= 0) return 1;
+  const front = Math.exp(-x + a * Math.log(x) - logGamma(a));
+  if (x < a + 1) {
+    let ap = a;
+    let del = 1 / a;
+    let sum = del;
+    for (let i = 0; i < MAX_ITERATIONS && Math.abs(del) > Math.abs(sum) * EPS; i++) {
+      ap += 1;
+      del *= x / ap;
+      sum += del;
+    }
+    return 1 - sum * front;
+  }
+  let b = x + 1 - a;
+  let c = 1 / TINY;
+  let d = 1 / b;
+  let h = d;
+  for (let i = 1; i <= MAX_ITERATIONS; i++) {
+    const an = -i * (i - a);
+    b += 2;
+    d = an * d + b;
+    if (Math.abs(d) < TINY) d = TINY;
+    c = b + an / c;
+    if (Math.abs(c) < TINY) c = TINY;
+    d = 1 / d;
+    const del = d * c;
+    h *= del;
+    if (Math.abs(del - 1) < EPS) break;
+  }
+  return front * h;
+}
+
+/** Standard normal CDF Φ(z), via erfc(x) = Q(½, x²) so that both tails keep their digits. */
+export function normalCdf(z: number): number {
+  if (Number.isNaN(z)) throw new Error("The normal CDF needs a number");
+  const tail = 0.5 * upperGamma(0.5, (z * z) / 2); // = Φ(−|z|)
+  return z < 0 ? tail : 1 - tail;
+}
+
+/** Standard normal density φ(z). */
+export function normalPdf(z: number): number {
+  return Math.exp(-0.5 * z * z) / Math.sqrt(2 * Math.PI);
+}
+
+/** Standard normal quantile z_p: simple-statistics' probit as a start, then Newton steps on Φ. */
+export function normalQuantile(p: number): number {
+  if (!(p > 0 && p < 1)) throw new Error("A normal quantile needs a probability strictly between 0 and 1");
+  // 1 − p is exact for p ≥ 0.5, so solve in the lower tail where Φ is accurate.
+  if (p > 0.5) return -normalQuantile(1 - p);
+  let z = probit(p);
+  for (let i = 0; i < 8; i++) {
+    const step = (normalCdf(z) - p) / normalPdf(z);
+    z -= step;
+    if (Math.abs(step) < 1e-14 * Math.max(1, Math.abs(z))) break;
+  }
+  return z;
+}
+
+function checkDf(df: number): void {
+  if (!(df > 0) || !Number.isFinite(df)) throw new Error("Degrees of freedom must be a positive number");
+}
+
+/** Upper tail P(T > t) of Student t with df degrees of freedom, for t ≥ 0: ½·I_{df/(df+t²)}(df/2, ½). */
+function studentTUpper(t: number, df: number): number {
+  return 0.5 * regularizedBeta(df / (df + t * t), df / 2, 0.5);
+}
+
+/** Student t CDF, from the incomplete beta (Abramowitz & Stegun 26.7.1 / 26.5.27). */
+export function studentTCdf(t: number, df: number): number {
+  checkDf(df);
+  if (Number.isNaN(t)) throw new Error("The Student t CDF needs a number");
+  if (t === Infinity) return 1;
+  if (t === -Infinity) return 0;
+  const upper = studentTUpper(Math.abs(t), df);
+  return t >= 0 ? 1 - upper : upper;
+}
+
+/** Student t quantile: bisection on the tail probability, which is monotone in t. */
+export function studentTQuantile(p: number, df: number): number {
+  checkDf(df);
+  if (!(p > 0 && p < 1)) throw new Error("A Student t quantile needs a probability strictly between 0 and 1");
+  if (p === 0.5) return 0;
+  // Work with the upper tail q of |t| so small probabilities keep their relative precision.
+  const q = p > 0.5 ? 1 - p : p;
+  let lo = 0;
+  let hi = 1;
+  while (studentTUpper(hi, df) > q) {
+    lo = hi;
+    hi *= 2;
+    if (hi > 1e300) throw new Error("The Student t quantile is too far in the tail to compute");
+  }
+  for (let i = 0; i < 200 && hi - lo > 1e-14 * hi; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (studentTUpper(mid, df) > q) lo = mid;
+    else hi = mid;
+  }
+  const t = 0.5 * (lo + hi);
+  return p > 0.5 ? t : -t;
+}
+
+/** Largest noncentrality the series below is used for: its first Poisson weight e^(−δ²/2) must not underflow. */
+export const MAX_NONCENTRALITY = 37;
+
+/**
+ * Noncentral t CDF P(T′ ≤ t; df, δ).
+ * Lenth (1989), Applied Statistics algorithm AS 243: a Poisson-weighted series in incomplete beta functions.
+ */
+export function nonCentralTCdf(t: number, df: number, delta: number): number {
+  checkDf(df);
+  if (Number.isNaN(t) || !Number.isFinite(delta)) throw new Error("The noncentral t CDF needs numbers");
+  if (Math.abs(delta) > MAX_NONCENTRALITY) throw new Error(`A noncentrality beyond ${MAX_NONCENTRALITY} is outside the range computed here`);
+  if (t === Infinity) return 1;
+  if (t === -Infinity) return 0;
+  // P(T′ ≤ t; δ) = 1 − P(T′ ≤ −t; −δ) reduces to t ≥ 0 (AS 243).
+  const negative = t < 0;
+  const tt = negative ? -t : t;
+  const del = negative ? -delta : delta;
+  let tnc = 0;
+  const x = (tt * tt) / (tt * tt + df);
+  if (x > 0) {
+    const lambda = del * del;
+    let p = 0.5 * Math.exp(-0.5 * lambda);
+    let q = Math.sqrt(2 / Math.PI) * p * del;
+    let s = 0.5 - p;
+    let a = 0.5;
+    const b = 0.5 * df;
+    const rxb = Math.pow(1 - x, b);
+    const lbeta = logBeta(a, b);
+    let xodd = regularizedBeta(x, a, b);
+    let godd = 2 * rxb * Math.exp(a * Math.log(x) - lbeta);
+    let xeven = 1 - rxb;
+    let geven = b * x * rxb;
+    tnc = p * xodd + q * xeven;
+    for (let en = 1; en <= MAX_ITERATIONS; en++) {
+      a += 1;
+      xodd -= godd;
+      xeven -= geven;
+      godd *= (x * (a + b - 1)) / a;
+      geven *= (x * (a + b - 0.5)) / (a + 0.5);
+      p *= lambda / (2 * en);
+      q *= lambda / (2 * en + 1);
+      s -= p;
+      tnc += p * xodd + q * xeven;
+      // AS 243 error bound: the Poisson mass not yet summed times the largest remaining beta term.
+      if (2 * s * (xodd - godd) <= 1e-13) break;
+      if (en === MAX_ITERATIONS) throw new Error("The noncentral t series did not converge");
+    }
+  }
+  tnc += normalCdf(-del);
+  tnc = Math.min(1, Math.max(0, tnc));
+  return negative ? 1 - tnc : tnc;
+}
+
+/** γ-quantile of the noncentral t: bracket, then bisection on the CDF, which rises monotonically in t. */
+export function nonCentralTQuantile(gamma: number, df: number, delta: number): number {
+  if (!(gamma > 0 && gamma < 1)) throw new Error("A noncentral t quantile needs a probability strictly between 0 and 1");
+  let lo = delta - 1;
+  let hi = delta + 1;
+  for (let step = 1; nonCentralTCdf(lo, df, delta) > gamma; step *= 2) {
+    hi = lo;
+    lo -= step;
+    if (step > 1e12) throw new Error("The noncentral t quantile could not be bracketed");
+  }
+  for (let step = 1; nonCentralTCdf(hi, df, delta) < gamma; step *= 2) {
+    lo = hi;
+    hi += step;
+    if (step > 1e12) throw new Error("The noncentral t quantile could not be bracketed");
+  }
+  for (let i = 0; i < 200 && hi - lo > 1e-12 * Math.max(1, Math.abs(hi)); i++) {
+    const mid = 0.5 * (lo + hi);
+    if (nonCentralTCdf(mid, df, delta) < gamma) lo = mid;
+    else hi = mid;
+  }
+  return 0.5 * (lo + hi);
+}
