@@ -13,11 +13,11 @@ interface Icc {
  * oneWay = ICC(1), absolute = ICC(A,·) = ICC(2,·), consistency = ICC(C,·) = ICC(3,·).
  */
 export function intraclass(ratings: readonly (readonly number[])[]): { single: Icc; average: Icc } {
-  if (!Array.isArray(ratings) || ratings.length < 2) throw new Error("An intraclass correlation needs at least 2 targets (rows)");
+  if (!ratings || ratings.length < 2) throw new Error("An intraclass correlation needs at least 2 targets (rows)");
   const k = ratings[0]?.length ?? 0;
   if (k < 2) throw new Error("An intraclass correlation needs at least 2 raters (columns)");
   for (const row of ratings) {
-    if (!Array.isArray(row) || row.length !== k) throw new Error("Every target must have a rating from every rater (rows of equal length)");
+    if (!row || row.length !== k) throw new Error("Every target must have a rating from every rater (rows of equal length)");
     checkValues(row, k, "An intraclass correlation");
   }
   const n = ratings.length;

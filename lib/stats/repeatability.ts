@@ -9,7 +9,7 @@ export const REPEATABILITY_FACTOR = 2.8;
  * ISO 5725-2:1994 §7.4 (repeatability variance) and ISO 5725-1 §4.1.4 (r = 2.8 σ_r).
  */
 export function pooledRepeatability(groups: readonly (readonly number[])[]): { sr: number; r: number } {
-  if (!Array.isArray(groups) || groups.length === 0) throw new Error("Pooled repeatability needs at least one group of values");
+  if (!groups || groups.length === 0) throw new Error("Pooled repeatability needs at least one group of values");
   let sum = 0;
   let df = 0;
   for (const g of groups) {
