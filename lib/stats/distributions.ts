@@ -136,6 +136,8 @@ function checkDf(df: number): void {
 
 /** Upper tail P(T > t) of Student t with df degrees of freedom, for t ≥ 0: ½·I_{df/(df+t²)}(df/2, ½). */
 function studentTUpper(t: number, df: number): number {
+  // Near t = 0, df/(df+t²) rounds to 1; the complementary form ½(1 − I_{t²/(df+t²)}(½, df/2)) keeps the digits.
+  if (t * t < df) return 0.5 * (1 - regularizedBeta((t * t) / (df + t * t), 0.5, df / 2));
   return 0.5 * regularizedBeta(df / (df + t * t), df / 2, 0.5);
 }
 
@@ -178,6 +180,8 @@ export const MAX_NONCENTRALITY = 37;
 /**
  * Noncentral t CDF P(T′ ≤ t; df, δ).
  * Lenth (1989), Applied Statistics algorithm AS 243: a Poisson-weighted series in incomplete beta functions.
+ * For t < 0 the value comes as 1 − (a value near 1) when δ ≫ 0, so that far tail is accurate to about
+ * 1e-15 absolutely, not relatively; tolerance factors only use t > 0.
  */
 export function nonCentralTCdf(t: number, df: number, delta: number): number {
   checkDf(df);
