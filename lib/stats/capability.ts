@@ -4,7 +4,7 @@ import { checkProbability, checkValues, meanAndSd } from "./sample";
 
 /**
  * Cpl = (mean − L)/(3s) (= Cpk with a lower limit only); estimated fraction below p̂ = Φ((L − mean)/s).
- * Montgomery, Introduction to Statistical Quality Control, process capability ratios (from memory).
+ * Standard capability ratio for a lower limit only; the fraction assumes normal drop times (standard; from memory).
  */
 export function fractionBelow(values: readonly number[], limit: number): { mean: number; sd: number; cpl: number; fraction: number } {
   checkValues(values, 2, "A fraction below a limit");

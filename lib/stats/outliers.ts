@@ -31,7 +31,7 @@ export function dixonQ(values: readonly number[], confidence: number): { q: numb
 
 /**
  * Two-sided Grubbs test: G = max|x − mean|/s against ((n−1)/√n)·√(t²/(n−2+t²)),
- * t the upper α/(2n) quantile of Student t with n − 2 df. Grubbs (1969); ISO 5725-2 §7.3.4.
+ * t the upper α/(2n) quantile of Student t with n − 2 df. Grubbs (1969), as used in ISO 5725-2.
  * G can never exceed (n−1)/√n, so with three values the test can flag one only when the other two nearly coincide.
  */
 export function grubbs(values: readonly number[], alpha: number): { g: number; critical: number; suspect: number; isOutlier: boolean } {

@@ -6,7 +6,7 @@ export const REPEATABILITY_FACTOR = 2.8;
 
 /**
  * Pooled repeatability s_r² = Σ(n_i − 1)s_i² / Σ(n_i − 1) over groups; r = 2.8·s_r.
- * ISO 5725-2:1994 §7.4 (repeatability variance) and ISO 5725-1 §4.1.4 (r = 2.8 σ_r).
+ * ISO 5725-2 (repeatability variance from cells) and ISO 5725-1 (repeatability limit r = 2.8·σ_r).
  */
 export function pooledRepeatability(groups: readonly (readonly number[])[]): { sr: number; r: number } {
   if (!groups || groups.length === 0) throw new Error("Pooled repeatability needs at least one group of values");
