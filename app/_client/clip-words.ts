@@ -15,6 +15,11 @@ export function seconds(s: number): string {
   return `${s.toFixed(3).replace(/\.?0+$/, "")} s`;
 }
 
+/** A measured time to the millisecond, zeros kept, so columns of drop times line up: "2.200 s". */
+export function milliseconds(s: number): string {
+  return `${s.toFixed(3)} s`;
+}
+
 export function rate(fps: number): string {
   return fps.toFixed(3).replace(/\.?0+$/, "");
 }

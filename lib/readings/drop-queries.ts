@@ -97,11 +97,6 @@ export async function listDropsOfRun(q: Db, runId: string): Promise<DropRow[]> {
   return (await base(q).where("d.run_id", runId).orderBy("d.ordinal")).map(toDrop);
 }
 
-export async function countReadingsOfDrop(q: Db, dropId: string): Promise<number> {
-  const r = await q("readings").where({ drop_id: dropId }).count<{ count: string }[]>("* as count").first();
-  return Number(r?.count ?? 0);
-}
-
 export async function updatePlacement(q: Db, id: string, p: { clipId: string; startFrame: number; placedBy: string }): Promise<void> {
   await q("drops").where({ id }).update({ clip_id: p.clipId, start_frame: p.startFrame, placed_by: p.placedBy, placed_at: q.fn.now() });
 }

@@ -6,9 +6,9 @@ import { db } from "../db";
 import { AppError } from "../errors";
 import { findRun } from "../runs/queries";
 import { assertLead } from "../submissions/policy";
-import { countReadingsOfDrop, findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./drop-queries";
+import { findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./drop-queries";
 import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer, isReviewer } from "./policy";
-import { listReadingsOfDrop, listReadingsOfDrops } from "./queries";
+import { countReadingsOfDrop, listReadingsOfDrop, listReadingsOfDrops } from "./queries";
 import type { PlacementInput } from "./schema";
 import { toDropView, type DropView, type QueueItem } from "./view";
 

@@ -53,6 +53,11 @@ export async function listReadingsOfDrop(q: Db, dropId: string): Promise<Reading
   return (await base(q).where("g.drop_id", dropId).orderBy("g.created_at")).map(toReading);
 }
 
+export async function countReadingsOfDrop(q: Db, dropId: string): Promise<number> {
+  const r = await q("readings").where({ drop_id: dropId }).count<{ count: string }[]>("* as count").first();
+  return Number(r?.count ?? 0);
+}
+
 export async function listReadingsOfDrops(q: Db, dropIds: string[]): Promise<ReadingRow[]> {
   if (dropIds.length === 0) return [];
   return (await base(q).whereIn("g.drop_id", dropIds).orderBy("g.created_at")).map(toReading);

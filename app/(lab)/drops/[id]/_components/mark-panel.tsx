@@ -1,11 +1,12 @@
 "use client";
 
+import { milliseconds } from "@/app/_client/clip-words";
 import { useDiscardDraft, useSubmitReading, type DropView } from "@/app/_client/drops";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { CorrectionForm } from "./correction-form";
 
-const s = (v: number) => `${v.toFixed(3)} s`;
+const s = milliseconds;
 
 /** The viewer's own reading: its marks as the server recorded them, and what can be done next. */
 export function MarkPanel({ drop, onJump }: { drop: DropView; onJump: (frame: number) => void }) {
@@ -43,7 +44,7 @@ export function MarkPanel({ drop, onJump }: { drop: DropView; onJump: (frame: nu
         <div className="flex items-baseline justify-between gap-2">
           <dt className="text-ink-600">Drop time</dt>
           <dd className="font-mono font-semibold" data-testid="draft-time">
-            {both ? `${s(draft.timeS!)} ± ${draft.uncertainty!.expanded.toFixed(3)} s` : "—"}
+            {both ? `${s(draft.timeS!)} ± ${s(draft.uncertainty!.expanded)}` : "—"}
           </dd>
         </div>
       </dl>

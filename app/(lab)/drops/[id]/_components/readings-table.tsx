@@ -1,7 +1,8 @@
+import { milliseconds } from "@/app/_client/clip-words";
 import type { DropView } from "@/app/_client/drops";
 import { LocalTime } from "@/components/ui/local-time";
 
-const s = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? "—" : `${v.toFixed(digits)} s`);
+const s = (v: number | null | undefined) => (v === null || v === undefined ? "—" : milliseconds(v));
 
 /** Every reading the viewer may see, superseded ones included, and how the two that count compare. */
 export function ReadingsTable({ drop, onJump }: { drop: DropView; onJump: (frame: number) => void }) {
@@ -34,7 +35,7 @@ export function ReadingsTable({ drop, onJump }: { drop: DropView; onJump: (frame
                 <td className="py-2 pr-4">{jump(r.dispenseFrame)}</td>
                 <td className="py-2 pr-4">{jump(r.clearFrame)}</td>
                 <td className="py-2 pr-4 font-mono">{s(r.timeS)}</td>
-                <td className="py-2 pr-4 font-mono">{r.uncertainty ? `± ${r.uncertainty.expanded.toFixed(3)} s` : "—"}</td>
+                <td className="py-2 pr-4 font-mono">{r.uncertainty ? `± ${milliseconds(r.uncertainty.expanded)}` : "—"}</td>
                 <td className="py-2 pr-4 no-underline">
                   {r.superseded ? "Superseded by a correction" : r.status === "draft" ? "Draft" : "Submitted"}
                   {r.submittedAt && <> · <LocalTime iso={r.submittedAt} /></>}
