@@ -6,6 +6,7 @@ export { fractionBelow, cpkInterval } from "./capability";
 export { dixonQ, grubbs } from "./outliers";
 export { pooledRepeatability, REPEATABILITY_FACTOR } from "./repeatability";
 export { intraclass, blandAltman } from "./agreement";
+export { welchInterval, summarize, type SampleSummary } from "./welch";
 export {
   normalCdf,
   normalQuantile,
