@@ -1,0 +1,136 @@
+import { fractionBelow, lowerToleranceLimit } from "../stats";
+import type { BallResult, ResultLimits } from "./rules";
+import { ballList, everyJudged, judged, pct, secs, sentences } from "./words";
+
+// The staged decision on a submission. After each round: every ball clear of the guard band meets
+// the limit; a ball below the limit is reported at once while testing goes on; a ball inside the
+// guard band asks for the next round. Once every round is in, the lower tolerance limit decides.
+
+export const DECISIONS = ["meets limit", "close to limit — more samples", "below limit", "pending"] as const;
+export type Decision = (typeof DECISIONS)[number];
+
+export interface ToleranceJudgement {
+  n: number;
+  mean: number;
+  sd: number;
+  k: number;
+  /** mean − k·s of the balls' judged values. */
+  limit: number;
+  coverage: number;
+  confidence: number;
+  /** Estimated fraction of balls below the minimum, Φ((L − mean)/s). */
+  fractionBelow: number;
+  /** (mean − L)/(3s); null when the values do not vary. */
+  cpl: number | null;
+  passes: boolean;
+}
+
+export interface SubmissionDecision {
+  decision: Decision;
+  /** The round the decision is about. */
+  round: number;
+  /** Every planned round is in: the tolerance limit may decide. */
+  finalRound: boolean;
+  decidedBy: "every ball clear" | "tolerance limit" | "single ball" | null;
+  explanation: string;
+  nextAction: string;
+  nextRound: { round: number; size: number } | null;
+  belowBalls: string[];
+  closeBalls: string[];
+  pendingBalls: string[];
+  /** Shown from two balls on; it decides only once every round is in. */
+  tolerance: ToleranceJudgement | null;
+}
+
+/** Lower tolerance limit of the balls' judged values against the minimum (exact k, noncentral t). */
+export function toleranceJudgement(values: number[], limits: ResultLimits): ToleranceJudgement | null {
+  if (values.length < 2) return null;
+  const { toleranceCoverage: coverage, toleranceConfidence: confidence, minAbsorptionS: L } = limits;
+  const t = lowerToleranceLimit(values, coverage, confidence);
+  const spread = t.sd > 0 ? fractionBelow(values, L) : null;
+  const fraction = spread ? spread.fraction : t.mean < L ? 1 : t.mean > L ? 0 : 0.5;
+  return { n: values.length, ...t, coverage, confidence, fractionBelow: fraction, cpl: spread?.cpl ?? null, passes: t.limit >= L };
+}
+
+function roundsExpected(limits: ResultLimits, round: number): number {
+  return limits.roundSizes.slice(0, round).reduce((a, b) => a + b, 0);
+}
+
+function belowSentence(below: BallResult[], limits: ResultLimits): string {
+  if (below.length === 0) return "";
+  const verb = below.length === 1 ? "is" : "are";
+  return `${ballList(below)} ${verb} below the ${secs(limits.minAbsorptionS, 0)} minimum: tell the manufacturer now; testing goes on.`;
+}
+
+export function judgeSubmission(limits: ResultLimits, balls: BallResult[], currentRound: number): SubmissionDecision {
+  const round = Math.max(1, currentRound, ...balls.map((b) => b.round));
+  const finalRound = round >= limits.roundSizes.length;
+  const inScope = balls.filter((b) => b.round <= round);
+  const pending = inScope.filter((b) => b.status === "pending");
+  const below = inScope.filter((b) => b.status === "below");
+  const close = inScope.filter((b) => b.status === "close");
+  const missing = Math.max(0, roundsExpected(limits, round) - inScope.length);
+  const values = inScope.filter((b) => b.value !== null).map((b) => b.value as number);
+  const tolerance = toleranceJudgement(values, limits);
+  const base = { round, finalRound, tolerance, belowBalls: below.map((b) => b.serial), closeBalls: close.map((b) => b.serial), pendingBalls: pending.map((b) => b.serial) };
+  const L = secs(limits.minAbsorptionS, 0);
+  const warn = belowSentence(below, limits);
+
+  if (pending.length > 0 || missing > 0) {
+    const waiting = [...pending.map((b) => `${b.serial} (${b.pendingReason})`), ...(missing > 0 ? [`${missing} sample${missing === 1 ? "" : "s"} of round ${round} not received`] : [])];
+    return {
+      ...base,
+      decision: "pending",
+      decidedBy: null,
+      explanation: sentences(`Round ${round}: ${inScope.length - pending.length} of ${inScope.length + missing} balls have results. Waiting: ${waiting.join("; ")}.`, warn),
+      nextAction: missing > 0 ? `Receive and test the rest of round ${round}.` : `Finish the runs and readings of round ${round}; the decision follows when every ball has a result.`,
+      nextRound: null,
+    };
+  }
+  const n = inScope.length;
+  const balls_ = `${n} ball${n === 1 ? "" : "s"}`;
+  if (below.length === 0 && close.length === 0) {
+    const lowest = inScope.reduce((a, b) => ((b.value as number) < (a.value as number) ? b : a));
+    return {
+      ...base,
+      decision: "meets limit",
+      decidedBy: "every ball clear",
+      explanation: `${balls_}; ${everyJudged(limits)} is at least ${secs(limits.minAbsorptionS + limits.guardBandS)}, clear of the ${L} minimum and its ${secs(limits.guardBandS, 0)} guard band (lowest: ${lowest.serial}, ${secs(lowest.value as number)}).`,
+      nextAction: "A lead reviews the results and signs them off.",
+      nextRound: null,
+    };
+  }
+  if (!finalRound) {
+    const size = limits.roundSizes[round];
+    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${secs(limits.guardBandS, 0)} guard band: ${ballList(close)}.` : "";
+    return {
+      ...base,
+      decision: "close to limit — more samples",
+      decidedBy: null,
+      explanation: sentences(`After round ${round}:`, closeWords, warn, `Round ${round + 1} asks for ${size} more sample${size === 1 ? "" : "s"}.`),
+      nextAction: `Request round ${round + 1}: ${size} more sample${size === 1 ? "" : "s"} from the manufacturer.`,
+      nextRound: { round: round + 1, size },
+    };
+  }
+  if (!tolerance) {
+    const ok = below.length === 0;
+    return {
+      ...base,
+      decision: ok ? "meets limit" : "below limit",
+      decidedBy: "single ball",
+      explanation: `1 ball, so no tolerance limit can be computed; its ${judged(limits)} ${secs(values[0])} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
+      nextAction: ok ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
+      nextRound: null,
+    };
+  }
+  const level = `${pct(tolerance.coverage)}/${pct(tolerance.confidence)}`;
+  const fraction = `estimated fraction of balls below the minimum ${pct(tolerance.fractionBelow, 2)}`;
+  return {
+    ...base,
+    decision: tolerance.passes ? "meets limit" : "below limit",
+    decidedBy: "tolerance limit",
+    explanation: `${balls_}; lower ${level} tolerance limit ${secs(tolerance.limit)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`,
+    nextAction: tolerance.passes ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
+    nextRound: null,
+  };
+}

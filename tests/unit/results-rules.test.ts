@@ -1,0 +1,147 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { ballResult, submissionResults, type BallInput, type ResultLimits } from "@/lib/results/rules";
+import { toleranceFactor } from "@/lib/stats";
+
+// The staged decision, branch by branch, on an example edition: 135 s minimum, 10 s guard band,
+// rounds of 2, 8 and 24, 90 % coverage at 95 % confidence. Every value here is an example.
+const LIMITS: ResultLimits = {
+  minAbsorptionS: 135,
+  criterion: "ball_mean",
+  dropsPerBall: 3,
+  guardBandS: 10,
+  roundSizes: [2, 8, 24],
+  toleranceCoverage: 0.9,
+  toleranceConfidence: 0.95,
+};
+
+let seq = 0;
+function ball(serial: string, round: number, times: (number | null)[], run: BallInput["run"] = { id: `run-${serial}`, needsAcceptance: false }): BallInput {
+  return {
+    sampleId: `s-${serial}`,
+    serial,
+    round,
+    weightG: 6800,
+    run,
+    drops: times.map((t, i) => ({ id: `d${++seq}`, ordinal: i + 1, settled: t !== null, timeS: t, uncertaintyS: 0.08, readers: ["A", "B"] })),
+  };
+}
+/** A ball whose three drops average `mean` exactly. */
+const at = (serial: string, round: number, mean: number) => ball(serial, round, [mean - 0.4, mean, mean + 0.4]);
+
+describe("ball results", () => {
+  it("gives n, mean, SD and range of the drop times", () => {
+    const b = ballResult(ball("A", 1, [150, 152, 154]), LIMITS);
+    expect(b).toMatchObject({ n: 3, mean: 152, sd: 2, min: 150, max: 154, range: 4, value: 152, status: "meets" });
+  });
+
+  it("sits below, close or clear by the ball mean, the guard band's edges included", () => {
+    expect(ballResult(at("A", 1, 134.9), LIMITS).status).toBe("below");
+    expect(ballResult(at("A", 1, 135), LIMITS).status).toBe("close");
+    expect(ballResult(at("A", 1, 144.9), LIMITS).status).toBe("close");
+    expect(ballResult(at("A", 1, 145), LIMITS).status).toBe("meets");
+  });
+
+  it("judges the shortest drop under the every-drop criterion", () => {
+    const input = ball("A", 1, [150, 150, 133]);
+    expect(ballResult(input, LIMITS)).toMatchObject({ value: (150 + 150 + 133) / 3, status: "close" });
+    expect(ballResult(input, { ...LIMITS, criterion: "every_drop" })).toMatchObject({ value: 133, status: "below" });
+  });
+
+  it("flags an outlying drop by Dixon's Q and keeps it in the mean", () => {
+    // r10 = (158.9 − 146.2)/(158.9 − 146.0) = 0.9845 > 0.970, the 95 % critical value for n = 3,
+    // Rorabacher (1991), Analytical Chemistry 63(2).
+    const b = ballResult(ball("A", 1, [146.0, 146.2, 158.9]), LIMITS);
+    expect(b.dixon?.q).toBeCloseTo(12.7 / 12.9, 10);
+    expect(b.dixon?.critical).toBe(0.97);
+    expect(b.drops.map((d) => d.outlier)).toEqual([false, false, true]);
+    expect(b.mean).toBeCloseTo((146.0 + 146.2 + 158.9) / 3, 10);
+    // 0.9690 stays under the same critical value: not flagged.
+    const near = ballResult(ball("B", 1, [146.0, 146.4, 158.9]), LIMITS);
+    expect(near.dixon?.q).toBeCloseTo(12.5 / 12.9, 10);
+    expect(near.drops.some((d) => d.outlier)).toBe(false);
+  });
+
+  it("waits for untested balls, unaccepted runs and unsettled drops", () => {
+    expect(ballResult(ball("A", 1, [], null), LIMITS)).toMatchObject({ status: "pending", pendingReason: "not tested yet" });
+    expect(ballResult(ball("A", 1, [150, 150, 150], { id: "r", needsAcceptance: true }), LIMITS).pendingReason).toMatch(/lead to accept/);
+    expect(ballResult(ball("A", 1, [150, null, 150]), LIMITS)).toMatchObject({ status: "pending", pendingReason: "2 of 3 drops settled", mean: null });
+  });
+});
+
+describe("the staged submission decision", () => {
+  it("all clear after round 1: meets the limit", () => {
+    const { decision } = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 152)], 1);
+    expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "every ball clear", nextRound: null });
+    expect(decision.explanation).toBe("2 balls; every ball mean is at least 145.0 s, clear of the 135 s minimum and its 10 s guard band (lowest: A, 150.0 s).");
+  });
+
+  it("one ball below after round 1: reported at once, and testing goes on with round 2", () => {
+    const { decision } = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 131.2)], 1);
+    expect(decision).toMatchObject({ decision: "close to limit — more samples", belowBalls: ["B"], nextRound: { round: 2, size: 8 } });
+    expect(decision.explanation).toContain("B (131.2 s) is below the 135 s minimum: tell the manufacturer now; testing goes on.");
+  });
+
+  it("one ball in the guard band after round 1 asks for round 2 of 8", () => {
+    const { decision } = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 141.2)], 1);
+    expect(decision).toMatchObject({ decision: "close to limit — more samples", closeBalls: ["B"], nextRound: { round: 2, size: 8 } });
+    expect(decision.explanation).toBe("After round 1: 1 of 2 balls is close to the 135 s minimum, inside its 10 s guard band: B (141.2 s). Round 2 asks for 8 more samples.");
+    expect(decision.nextAction).toBe("Request round 2: 8 more samples from the manufacturer.");
+  });
+
+  it("a ball in the guard band after round 2 asks for round 3 of 24", () => {
+    const balls = [at("A", 1, 150), at("B", 1, 141.2), ...Array.from({ length: 8 }, (_, i) => at(`C${i}`, 2, 146 + i))];
+    expect(submissionResults(LIMITS, balls, 2).decision.nextRound).toEqual({ round: 3, size: 24 });
+  });
+
+  it("waits while a ball of the round has no result or samples are missing, and still reports a ball below", () => {
+    const d = submissionResults(LIMITS, [at("A", 1, 131), ball("B", 1, [150, null, 150])], 1).decision;
+    expect(d).toMatchObject({ decision: "pending", pendingBalls: ["B"], belowBalls: ["A"] });
+    expect(d.explanation).toBe("Round 1: 1 of 2 balls have results. Waiting: B (2 of 3 drops settled). A (131.0 s) is below the 135 s minimum: tell the manufacturer now; testing goes on.");
+    const short = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 150), at("C", 2, 150)], 2).decision;
+    expect(short).toMatchObject({ decision: "pending" });
+    expect(short.explanation).toContain("7 samples of round 2 not received");
+  });
+
+  // Final rounds on an edition of two rounds (2 + 8 = 10 balls), so the factor is a tabulated one:
+  // k = 2.355 for n = 10, p = 0.90, γ = 0.95 (Montgomery & Runger, table of one-sided tolerance factors).
+  const TWO_ROUNDS = { ...LIMITS, roundSizes: [2, 8] };
+  const tenBalls = (means: number[]) => means.map((m, i) => at(`B${i}`, i < 2 ? 1 : 2, m));
+
+  it("final judgement passes when the lower tolerance limit is above the minimum", () => {
+    const means = [141, 142, 143, 145, 146, 146, 147, 149, 150, 151];
+    const { decision } = submissionResults(TWO_ROUNDS, tenBalls(means), 2);
+    const t = decision.tolerance!;
+    expect(t.k).toBeCloseTo(2.355, 3);
+    expect(t.mean).toBeCloseTo(146, 10);
+    expect(t.limit).toBeCloseTo(146 - t.k * t.sd, 10);
+    expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "tolerance limit", finalRound: true });
+    expect(decision.explanation).toMatch(/^10 balls; lower 90 %\/95 % tolerance limit 13\d\.\d s is at or above the 135 s minimum; estimated fraction of balls below the minimum \d+(\.\d+)? %\.$/);
+  });
+
+  it("final judgement fails when the lower tolerance limit is below the minimum", () => {
+    const { decision } = submissionResults(TWO_ROUNDS, tenBalls([136, 138, 140, 146, 150, 152, 155, 158, 160, 165]), 2);
+    expect(decision.tolerance!.limit).toBeLessThan(135);
+    expect(decision).toMatchObject({ decision: "below limit", decidedBy: "tolerance limit" });
+    expect(decision.explanation).toContain("is below the 135 s minimum");
+  });
+
+  it("an edition of one round of one ball is judged by that ball", () => {
+    const one = { ...LIMITS, roundSizes: [1] };
+    expect(submissionResults(one, [at("A", 1, 140)], 1).decision).toMatchObject({ decision: "meets limit", decidedBy: "single ball" });
+    expect(submissionResults(one, [at("A", 1, 130)], 1).decision).toMatchObject({ decision: "below limit", decidedBy: "single ball" });
+  });
+
+  it("meets once every round is in exactly when every ball is clear or the tolerance limit holds (property)", () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: 125, max: 175, noNaN: true }), { minLength: 10, maxLength: 10 }), (means) => {
+        const { decision } = submissionResults(TWO_ROUNDS, tenBalls(means), 2);
+        const clear = means.every((m) => m >= 145);
+        const ltl = decision.tolerance!.limit;
+        expect(decision.decision === "meets limit").toBe(clear || ltl >= 135);
+        expect(decision.tolerance!.k).toBeCloseTo(toleranceFactor(10, 0.9, 0.95), 12);
+      }),
+      { numRuns: 50 },
+    );
+  });
+});
