@@ -135,6 +135,8 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
   "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
+  // Results reach the manufacturer only once released: until then its own submission's results are refused.
+  "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
 };
 
 const clients = new Map<Who, Client>();

@@ -1,0 +1,5 @@
+import { route } from "@/lib/http/route";
+import { getSubmissionResults } from "@/lib/results/service";
+
+// GET /api/submissions/:id/results — ball results and the staged decision, computed from settled drops
+export const GET = route({ signedIn: true }, async ({ actor, params }) => getSubmissionResults(actor, String(params.id)));
