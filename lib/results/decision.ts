@@ -1,6 +1,6 @@
 import { fractionBelow, lowerToleranceLimit } from "../stats";
 import type { BallResult, ResultLimits } from "./rules";
-import { ballList, everyJudged, judged, pct, secs, sentences } from "./words";
+import { ballList, everyJudged, judged, limitSecs, pct, secs, secsAgainst, sentences } from "./words";
 
 // The staged decision on a submission. After each round: every ball clear of the guard band meets
 // the limit; a ball below the limit is reported at once while testing goes on; a ball inside the
@@ -59,7 +59,7 @@ function roundsExpected(limits: ResultLimits, round: number): number {
 function belowSentence(below: BallResult[], limits: ResultLimits): string {
   if (below.length === 0) return "";
   const verb = below.length === 1 ? "is" : "are";
-  return `${ballList(below)} ${verb} below the ${secs(limits.minAbsorptionS, 0)} minimum: tell the manufacturer now; testing goes on.`;
+  return `${ballList(below)} ${verb} below the ${limitSecs(limits.minAbsorptionS)} minimum: tell the manufacturer now; testing goes on.`;
 }
 
 export function judgeSubmission(limits: ResultLimits, balls: BallResult[], currentRound: number): SubmissionDecision {
@@ -73,7 +73,7 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
   const values = inScope.filter((b) => b.value !== null).map((b) => b.value as number);
   const tolerance = toleranceJudgement(values, limits);
   const base = { round, finalRound, tolerance, belowBalls: below.map((b) => b.serial), closeBalls: close.map((b) => b.serial), pendingBalls: pending.map((b) => b.serial) };
-  const L = secs(limits.minAbsorptionS, 0);
+  const L = limitSecs(limits.minAbsorptionS);
   const warn = belowSentence(below, limits);
 
   if (pending.length > 0 || missing > 0) {
@@ -95,14 +95,14 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       ...base,
       decision: "meets limit",
       decidedBy: "every ball clear",
-      explanation: `${balls_}; ${everyJudged(limits)} is at least ${secs(limits.minAbsorptionS + limits.guardBandS)}, clear of the ${L} minimum and its ${secs(limits.guardBandS, 0)} guard band (lowest: ${lowest.serial}, ${secs(lowest.value as number)}).`,
+      explanation: `${balls_}; ${everyJudged(limits)} is at least ${secs(limits.minAbsorptionS + limits.guardBandS)}, clear of the ${L} minimum and its ${limitSecs(limits.guardBandS)} guard band (lowest: ${lowest.serial}, ${secs(lowest.value as number)}).`,
       nextAction: "A lead reviews the results and signs them off.",
       nextRound: null,
     };
   }
   if (!finalRound) {
     const size = limits.roundSizes[round];
-    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${secs(limits.guardBandS, 0)} guard band: ${ballList(close)}.` : "";
+    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${limitSecs(limits.guardBandS)} guard band: ${ballList(close)}.` : "";
     return {
       ...base,
       decision: "close to limit — more samples",
@@ -129,7 +129,7 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
     ...base,
     decision: tolerance.passes ? "meets limit" : "below limit",
     decidedBy: "tolerance limit",
-    explanation: `${balls_}; lower ${level} tolerance limit ${secs(tolerance.limit)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`,
+    explanation: `${balls_}; lower ${level} tolerance limit ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`,
     nextAction: tolerance.passes ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
     nextRound: null,
   };

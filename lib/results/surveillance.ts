@@ -1,7 +1,7 @@
 import { summarize, welchInterval, type SampleSummary } from "../stats";
 import { toleranceJudgement, type Decision, type ToleranceJudgement } from "./decision";
 import type { BallResult, ResultLimits } from "./rules";
-import { judged, pct, secs, sentences } from "./words";
+import { judged, limitSecs, pct, secs, secsAgainst, sentences } from "./words";
 
 // Market samples against the approval results of the same model: the difference in means with a
 // Welch interval, and the same tolerance judgement on the market samples alone.
@@ -31,7 +31,7 @@ export function compareWithApproval(
   const as = a.length ? summarize(a) : null;
   const tolerance = toleranceJudgement(m, limits);
   const head = { approval: { submissionId: approval.submissionId, reference: approval.reference, decision: approval.decision, summary: as }, market: { summary: ms, tolerance } };
-  const L = secs(limits.minAbsorptionS, 0);
+  const L = limitSecs(limits.minAbsorptionS);
   const what = judged(limits);
 
   let difference: SurveillanceComparison["difference"] = null;
@@ -50,7 +50,7 @@ export function compareWithApproval(
   const judgement = pending
     ? "The judgement waits until every market ball has a result."
     : tolerance
-      ? `Lower ${pct(tolerance.coverage)}/${pct(tolerance.confidence)} tolerance limit of the market samples ${secs(tolerance.limit)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum: the market samples ${tolerance.passes ? "still meet" : "no longer meet"} the limit.`
+      ? `Lower ${pct(tolerance.coverage)}/${pct(tolerance.confidence)} tolerance limit of the market samples ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum: the market samples ${tolerance.passes ? "still meet" : "no longer meet"} the limit.`
       : `With one market ball there is no tolerance limit; its ${what} ${secs(m[0])} is ${stillMeets ? "at or above" : "below"} the ${L} minimum.`;
   return { ...head, difference, stillMeets, explanation: sentences(compare, judgement) };
 }

@@ -6,6 +6,17 @@ export function secs(v: number, digits = 1): string {
   return `${v.toFixed(digits)} s`;
 }
 
+/** A value compared with a limit: one decimal, more when one would round it onto the limit. */
+export function secsAgainst(v: number, limit: number): string {
+  for (const digits of [1, 2, 3]) if (Number(v.toFixed(digits)) !== limit || digits === 3) return secs(v, digits);
+  return secs(v);
+}
+
+/** An edition's value as set: 135 → "135 s", 0.3 → "0.3 s". */
+export function limitSecs(v: number): string {
+  return `${Number(v.toFixed(3))} s`;
+}
+
 /** 0.95 → "95 %", 0.999 → "99.9 %", 0.0042 with 2 digits → "0.42 %". */
 export function pct(p: number, digits = 1): string {
   return `${Number((p * 100).toFixed(digits)).toString()} %`;

@@ -17,6 +17,11 @@ export async function json<T = any>(res: Response, status: number): Promise<T> {
 export async function placedDrops(c: Client, opts: { file?: string; startFrame?: number } = {}): Promise<{ runId: string; clipId: string; dropIds: string[] }> {
   const s = await newSubmission(c, await demoOrganisationId());
   const runId = (await newRun(c, (await newSample(c, s.id)).id)).id;
+  return placeOnRun(c, runId, opts);
+}
+
+/** Uploads a clip to the run, waits until the worker has made it ready, and places every drop on it. */
+export async function placeOnRun(c: Client, runId: string, opts: { file?: string; startFrame?: number } = {}): Promise<{ runId: string; clipId: string; dropIds: string[] }> {
   const clip = await waitForClip(c, (await uploadFile(c, runId, opts.file ?? plainMp4())).clipId);
   expect(clip.status, clip.rejectReason ?? "").toBe("ready");
   const { drops } = await json<{ drops: DropView[] }>(await c.get(`/api/runs/${runId}/drops`), 200);

@@ -23,9 +23,12 @@ export function SubmissionSummary({ submission: s, edition }: Pick<StaffSubmissi
   ];
   return (
     <header className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <div>
-        <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">Submission {s.reference}</p>
-        <h1 className="text-3xl font-bold">{s.modelName}</h1>
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">Submission {s.reference}</p>
+          <h1 className="text-3xl font-bold">{s.modelName}</h1>
+        </div>
+        <Link href={`/submissions/${s.id}/results`} className="rounded-md bg-wick-600 px-4 py-2 font-semibold text-white hover:bg-wick-700">Results and decision</Link>
       </div>
       <DetailList items={items} />
       <p className="text-sm text-ink-600">

@@ -1,0 +1,48 @@
+import { s1, type ResultsView } from "@/app/_client/results";
+import { DetailList } from "@/components/ui/detail-list";
+import { Notice } from "@/components/ui/notice";
+import { DecisionBadge } from "./ball-status";
+
+const pct = (p: number, digits = 1) => `${Number((p * 100).toFixed(digits))} %`;
+
+/** The decision, why, what comes next, and the tolerance figures behind it. */
+export function DecisionPanel({ decision: d, edition }: Pick<ResultsView, "decision" | "edition">) {
+  const t = d.tolerance;
+  return (
+    <section aria-labelledby="decision-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+      <div className="flex flex-wrap items-baseline gap-3">
+        <h2 id="decision-heading" className="text-xl font-semibold">Decision after round {d.round}</h2>
+        <DecisionBadge decision={d.decision} />
+      </div>
+      <p className="max-w-4xl text-ink-900" data-testid="decision-explanation">{d.explanation}</p>
+      <p className="text-sm"><strong>Next:</strong> {d.nextAction}</p>
+      {d.belowBalls.length > 0 && (
+        <Notice tone="error">
+          <strong>Below the {edition.minAbsorptionS} s minimum: {d.belowBalls.join(", ")}.</strong> The manufacturer is told at once; testing goes on.
+        </Notice>
+      )}
+      {t && (
+        <div className="space-y-2 border-t border-ink-100 pt-4">
+          <h3 className="font-semibold">
+            Lower tolerance limit {t.passes ? "at or above" : "below"} the minimum{" "}
+            <span className="font-normal text-ink-600">({d.finalRound ? "decides once every round is in" : "for information until the last round is in"})</span>
+          </h3>
+          <DetailList
+            items={[
+              { label: "Balls", value: t.n },
+              { label: "Mean of ball values", value: s1(t.mean) },
+              { label: "Standard deviation", value: `${t.sd.toFixed(2)} s` },
+              { label: `k (${pct(t.coverage)} coverage, ${pct(t.confidence)} confidence)`, value: t.k.toFixed(3) },
+              { label: "Lower tolerance limit", value: `${t.limit.toFixed(2)} s` },
+              { label: "Estimated fraction below the minimum", value: pct(t.fractionBelow, 2) },
+              { label: "Cpl", value: t.cpl === null ? "—" : t.cpl.toFixed(2) },
+            ]}
+          />
+          <p className="text-xs text-ink-600">
+            Limit = mean − k·s, with k exact from the noncentral t distribution; the fraction below is Φ((minimum − mean)/s) and assumes normally distributed ball values.
+          </p>
+        </div>
+      )}
+    </section>
+  );
+}
