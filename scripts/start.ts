@@ -7,6 +7,7 @@ import { startStack } from "./stack";
 import { db } from "../lib/db";
 import { DEMO_PASSWORD, DEMO_USERS } from "../seeds/demo";
 import { seedDemoClips } from "../seeds/demo-clips";
+import { seedDemoReadings } from "../seeds/demo-results";
 
 // `npm start` (and `npm run dev` with --dev): everything on loopback, data kept between runs.
 const dev = process.argv.includes("--dev");
@@ -46,7 +47,12 @@ async function main() {
   log(`Demo accounts (password "${DEMO_PASSWORD}"):`);
   for (const u of DEMO_USERS) log(`  ${u.roles.join(" + ").padEnd(18)} ${u.email}`);
   log(`Logs are in ${path.relative(process.cwd(), logs())}. Press Ctrl-C to stop.`);
-  seedDemoClips(db(), path.join(profile.dataDir, "demo-clips"), log).catch((err) => log(`demo recordings not made: ${err instanceof Error ? err.message : err}`));
+  // In the background, one after the other: the app is already served.
+  const why = (err: unknown) => (err instanceof Error ? err.message : String(err));
+  void seedDemoClips(db(), path.join(profile.dataDir, "demo-clips"), log)
+    .catch((err) => log(`demo recordings not made: ${why(err)}`))
+    .then(() => seedDemoReadings(db(), path.join(profile.dataDir, "demo-readings"), log))
+    .catch((err) => log(`demo readings not made: ${why(err)}`));
 }
 
 const logs = () => path.join(profile.dataDir, "logs");

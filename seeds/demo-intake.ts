@@ -58,8 +58,9 @@ const SUBMISSIONS: DemoSubmission[] = [
     samples: [
       sample("HL-2001", 6803.89, 1, 28),
       sample("HL-2002", 6795.2, 1, 28),
-      // The first round-2 ball was tested after only 14 h in the room: the demo's condition warning.
-      ...Array.from({ length: 8 }, (_, i) => sample(`HL-21${String(i + 1).padStart(2, "0")}`, 6790 + i * 3.5, 2, i === 0 ? 14 : null)),
+      // Every ball has its run. The first round-2 ball was tested after only 14 h in the room: the
+      // demo's condition warning; the others after a day or more.
+      ...Array.from({ length: 8 }, (_, i) => sample(`HL-21${String(i + 1).padStart(2, "0")}`, 6790 + i * 3.5, 2, i === 0 ? 14 : 25 + i)),
     ] },
   { reference: "D-2026-0003", org: SECOND_ORGANISATION, model: "Marsh Ember (invented)", kind: "approval", round: 1, status: "received", receivedOn: "2026-11-20",
     samples: [sample("ME-0301", 6350.29), sample("ME-0302", 6361.0)] },
@@ -75,7 +76,12 @@ export async function seedIntake(knex: Knex): Promise<void> {
   const technician = await knex("users").where({ email: "technician@marrowfield.test" }).first("id");
 
   for (const s of SUBMISSIONS) {
-    if (await knex("submissions").where({ reference: s.reference }).first("id")) continue;
+    const existing = await knex("submissions").where({ reference: s.reference }).first("id");
+    if (existing) {
+      // An older demo database: add only the runs of demo samples that have none yet.
+      await addMissingRuns(knex, existing.id, s, technician.id);
+      continue;
+    }
     const org = await knex("organisations").whereRaw("lower(name) = lower(?)", [s.org]).first("id");
     const approval = s.approval ? await knex("submissions").where({ reference: s.approval }).first("id") : null;
     const [{ id }] = await knex("submissions")
@@ -87,15 +93,27 @@ export async function seedIntake(knex: Knex): Promise<void> {
       const [{ id: sampleId }] = await knex("samples")
         .insert({ submission_id: id, serial: x.serial, weight_g: x.weightG, round: x.round, received_at: receivedAt, acclimation_started_at: receivedAt })
         .returning("id");
-      if (x.acclimatedH === null) continue;
-      const testedAt = new Date(receivedAt.getTime() + x.acclimatedH * 3_600_000);
-      const [{ id: runId }] = await knex("runs")
-        .insert({ sample_id: sampleId, tested_at: testedAt, technician_id: technician.id, room_temp_c: 22.5, surface_temp_c: 22.1, prep_method: "Demo preparation: wiped, abraded, wiped (invented)",
-          prep_abrasive: "Demo pad 500", prep_pad_position: "cycle 3 of 10", roughness_ra_um: [0.42, 0.45, 0.44], oil_lot: "DEMO-OIL-7", dispenser_check_value: 12.1, dispenser_check_unit: "mg", camera_id: "CAM-A" })
-        .returning("id");
-      await knex("drops").insert([1, 2, 3].map((ordinal) => ({ run_id: runId, ordinal })));
+      if (x.acclimatedH !== null) await insertDemoRun(knex, sampleId, receivedAt, x.acclimatedH, technician.id);
     }
   }
   // Later references continue after the demo ones.
   await knex.raw("select setval('submission_reference_seq', greatest((select last_value from submission_reference_seq), 10))");
+}
+
+async function insertDemoRun(knex: Knex, sampleId: string, acclimationStart: Date, acclimatedH: number, technicianId: string): Promise<void> {
+  const testedAt = new Date(acclimationStart.getTime() + acclimatedH * 3_600_000);
+  const [{ id: runId }] = await knex("runs")
+    .insert({ sample_id: sampleId, tested_at: testedAt, technician_id: technicianId, room_temp_c: 22.5, surface_temp_c: 22.1, prep_method: "Demo preparation: wiped, abraded, wiped (invented)",
+      prep_abrasive: "Demo pad 500", prep_pad_position: "cycle 3 of 10", roughness_ra_um: [0.42, 0.45, 0.44], oil_lot: "DEMO-OIL-7", dispenser_check_value: 12.1, dispenser_check_unit: "mg", camera_id: "CAM-A" })
+    .returning("id");
+  await knex("drops").insert([1, 2, 3].map((ordinal) => ({ run_id: runId, ordinal })));
+}
+
+async function addMissingRuns(knex: Knex, submissionId: string, s: DemoSubmission, technicianId: string): Promise<void> {
+  for (const x of s.samples) {
+    if (x.acclimatedH === null) continue;
+    const row = await knex("samples as x").where({ "x.submission_id": submissionId, "x.serial": x.serial })
+      .first("x.id", "x.acclimation_started_at", knex.raw("exists (select 1 from runs r where r.sample_id = x.id) as has_run"));
+    if (row && !row.has_run && row.acclimation_started_at) await insertDemoRun(knex, row.id, new Date(row.acclimation_started_at), x.acclimatedH, technicianId);
+  }
 }
