@@ -135,6 +135,7 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
   "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
+  "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },
 };
 
 const clients = new Map<Who, Client>();
