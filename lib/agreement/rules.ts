@@ -51,6 +51,9 @@ export interface ReviewerBias {
 
 export interface PairPoint {
   dropId: string;
+  submissionReference: string;
+  sampleSerial: string;
+  ordinal: number;
   meanS: number;
   differenceS: number;
 }
@@ -67,6 +70,14 @@ export interface AgreementSummary {
   points: PairPoint[];
   reviewers: ReviewerBias[];
   largest: LargestDisagreement[];
+}
+
+/** The summary of one period, as the API returns it. */
+export interface AgreementReport extends AgreementSummary {
+  from: string;
+  to: string;
+  /** Set when the period held more pairs than are read at once: only the most recent count. */
+  truncatedAt: number | null;
 }
 
 const difference = (p: ReadingPair) => p.first.timeS - p.second.timeS;
@@ -113,7 +124,14 @@ export function largestDisagreements(pairs: readonly ReadingPair[], count = LARG
 
 export function summariseAgreement(pairs: readonly ReadingPair[]): AgreementSummary {
   const n = pairs.length;
-  const points = pairs.map((p) => ({ dropId: p.dropId, meanS: (p.first.timeS + p.second.timeS) / 2, differenceS: difference(p) }));
+  const points = pairs.map((p) => ({
+    dropId: p.dropId,
+    submissionReference: p.submissionReference,
+    sampleSerial: p.sampleSerial,
+    ordinal: p.ordinal,
+    meanS: (p.first.timeS + p.second.timeS) / 2,
+    differenceS: difference(p),
+  }));
   const reason =
     n === 0
       ? "No drop in this period has two submitted readings yet."

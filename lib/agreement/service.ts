@@ -2,15 +2,8 @@ import type { Actor } from "../auth/actor";
 import { db } from "../db";
 import { assertCanSeeAgreement } from "./policy";
 import { listReadingPairs, PAIR_LIMIT } from "./queries";
-import { summariseAgreement, type AgreementSummary } from "./rules";
+import { summariseAgreement, type AgreementReport } from "./rules";
 import { rangeInstants, type AgreementQuery } from "./schema";
-
-export interface AgreementReport extends AgreementSummary {
-  from: string;
-  to: string;
-  /** Set when the period held more pairs than are read at once: only the most recent count. */
-  truncatedAt: number | null;
-}
 
 /** How the two blind readings agreed over drops settled in a period (whole UTC days). */
 export async function reviewerAgreement(actor: Actor, q: AgreementQuery): Promise<AgreementReport> {

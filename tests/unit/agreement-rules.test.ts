@@ -74,7 +74,7 @@ describe("summariseAgreement", () => {
 
   it("plots each drop at the mean of its readings against first − second", () => {
     const s = summariseAgreement(LANCET);
-    expect(s.points[0]).toEqual({ dropId: "drop-00", meanS: (494 + 512) / 2, differenceS: 494 - 512 });
+    expect(s.points[0]).toEqual({ dropId: "drop-00", submissionReference: "S-1", sampleSerial: "B1", ordinal: 1, meanS: (494 + 512) / 2, differenceS: 494 - 512 });
     expect(s.points).toHaveLength(17);
   });
 
