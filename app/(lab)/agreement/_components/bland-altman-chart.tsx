@@ -4,26 +4,17 @@ import { CartesianGrid, ReferenceLine, Scatter, ScatterChart, XAxis, YAxis } fro
 import { referenceLabel, xAxisLabel, yAxisLabel } from "@/components/charts/axis-label";
 import { ChartFigure } from "@/components/charts/chart-figure";
 import { ReferenceLegend } from "@/components/charts/legend";
+import { niceScale } from "@/components/charts/scale";
 import { AXIS, CHART_MARGIN, CHART_ROOT, GRID, REFERENCE, SERIES } from "@/components/charts/theme";
 import type { AgreementReport } from "@/app/_client/agreement";
 import { signedMs, tableMs } from "./numbers";
-
-/** A domain with a little room on both sides, so no point sits on the frame. */
-function padded(values: number[]): [number, number] {
-  const lo = Math.min(...values);
-  const hi = Math.max(...values);
-  const pad = hi > lo ? (hi - lo) * 0.08 : Math.max(Math.abs(hi) * 0.05, 0.05);
-  return [lo - pad, hi + pad];
-}
-
-const tick = (v: number) => (Math.abs(v) >= 10 ? v.toFixed(0) : v.toFixed(2));
 
 /** Bland–Altman plot: each drop's first − second against the mean of its two readings. */
 export function BlandAltmanChart({ report }: { report: AgreementReport }) {
   const s = report.statistics;
   const points = report.points;
-  const x = padded(points.map((p) => p.meanS));
-  const y = padded([...points.map((p) => p.differenceS), ...(s ? [s.lowerS, s.upperS] : []), 0]);
+  const x = niceScale(points.map((p) => p.meanS));
+  const y = niceScale([...points.map((p) => p.differenceS), ...(s ? [s.lowerS, s.upperS] : []), 0]);
   const lines = s
     ? [
         { kind: "limit" as const, value: s.upperS, text: `Upper limit ${signedMs(s.upperS)}` },
@@ -46,10 +37,10 @@ export function BlandAltmanChart({ report }: { report: AgreementReport }) {
     >
       <ScatterChart {...CHART_ROOT} margin={{ ...CHART_MARGIN, right: 150, left: 32 }}>
         <CartesianGrid {...GRID} />
-        <XAxis type="number" dataKey="meanS" domain={x} tickFormatter={tick} {...AXIS} label={xAxisLabel("Mean of the two readings", "s")} />
-        <YAxis type="number" dataKey="differenceS" domain={y} tickFormatter={tick} {...AXIS} width={64} label={yAxisLabel("First − second", "s")} />
+        <XAxis type="number" dataKey="meanS" domain={x.domain} ticks={x.ticks} tickFormatter={x.format} {...AXIS} label={xAxisLabel("Mean of the two readings", "s")} />
+        <YAxis type="number" dataKey="differenceS" domain={y.domain} ticks={y.ticks} tickFormatter={y.format} {...AXIS} width={64} label={yAxisLabel("First − second", "s")} />
         {lines.map((l) => (
-          <ReferenceLine key={l.text} y={l.value} {...REFERENCE[l.kind]} ifOverflow="extendDomain" label={referenceLabel(l.text, REFERENCE[l.kind].stroke)} />
+          <ReferenceLine key={l.text} y={l.value} {...REFERENCE[l.kind]} label={referenceLabel(l.text, REFERENCE[l.kind].stroke)} />
         ))}
         <Scatter data={points} fill={SERIES[0].colour} stroke={SERIES[0].colour} shape={SERIES[0].shape} isAnimationActive={false} />
       </ScatterChart>
