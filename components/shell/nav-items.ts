@@ -16,6 +16,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/submissions", label: "Submissions", roles: STAFF },
   { href: "/queue", label: "Reading queue", roles: ["reviewer"] },
   { href: "/discrepancies", label: "Discrepancies", roles: ["lead"] },
+  { href: "/agreement", label: "Reviewer agreement", roles: ["lead"] },
   // Every staff member may read the editions; reviewers rarely need to, so they are not offered them here.
   { href: "/editions", label: "Editions", roles: ["lead", "technician"] },
   { href: "/organisations", label: "Organisations", roles: ["lead"] },

@@ -12,7 +12,7 @@ afterAll(() => browser?.close());
 const CASES = [
   { role: "technician", home: "/overview", nav: ["Overview", "Submissions", "Editions", "Help"] },
   { role: "reviewer", home: "/overview", nav: ["Overview", "Submissions", "Reading queue", "Help"] },
-  { role: "lead", home: "/overview", nav: ["Overview", "Submissions", "Reading queue", "Discrepancies", "Editions", "Organisations", "Users", "Outbox", "Help"] },
+  { role: "lead", home: "/overview", nav: ["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Outbox", "Help"] },
   { role: "manufacturer", home: "/portal", nav: ["Our submissions", "Help"] },
 ] as const;
 

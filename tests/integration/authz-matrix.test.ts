@@ -137,6 +137,7 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
+  "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },
 };
 
 const clients = new Map<Who, Client>();

@@ -83,9 +83,11 @@ describe("blind second reading, for every endpoint that returns drops or reading
     for (const [who, c] of observers) {
       for (const path of [`/api/runs/${runId}`, `/api/submissions/${submissionId}`]) expectNothingOfTheFirstReading(await json(await c.get(path), 200));
       if (!who.startsWith("lead")) continue;
-      // Other tests' settled drops are in the leads' queue; this one is not, nor any trace of its reading.
-      const text = JSON.stringify(await json(await c.get("/api/discrepancies"), 200));
-      for (const secret of [x, firstReadingId, firstUser.id]) expect(text).not.toContain(secret);
+      // Other tests' settled drops are in the leads' queue and the agreement; this one is not, nor any trace of its reading.
+      for (const path of ["/api/discrepancies", "/api/agreement"]) {
+        const text = JSON.stringify(await json(await c.get(path), 200));
+        for (const secret of [x, firstReadingId, firstUser.id]) expect(text, path).not.toContain(secret);
+      }
     }
   });
 
