@@ -1,25 +1,13 @@
 "use client";
 
 /**
-<<<<<<< HEAD
- * How to use: wrap every chart in `<ChartFigure title description table>{chart}</ChartFigure>`.
-=======
  * How to use: wrap every chart in `<ChartFigure title description table legend>{chart}</ChartFigure>`.
->>>>>>> agreement
  * The figure shows the title as its caption, then the chart inside an element with role="img"
  * whose aria-label is `label` (or the title and description), then a "Show the numbers as a table"
  * disclosure holding a real <table> of `table.columns` × `table.rows` that is always in the DOM, so
  * screen readers, tests and anyone who wants the numbers read the same values the chart draws.
  * The chart child is a client component rendering recharts: spread `CHART_ROOT` from ./theme on its
  * root (responsive width, fixed height, recharts' own keyboard layer off because this figure is the
-<<<<<<< HEAD
- * accessible image), take colours, dash patterns and fonts from ./theme, and give every axis a
- * label with its unit through ./axis-label (`xAxisLabel("Mean of the two readings", "s")`).
- * Put a `legend` (./legend `ReferenceLegend`) outside the image. Format the table's numbers as the page shows them elsewhere; numbers are printed as given.
- */
-import { useId, type ReactNode } from "react";
-
-=======
  * accessible image); take colours, dash patterns and fonts from ./theme; give every axis a label
  * with its unit through ./axis-label (`xAxisLabel("Mean of the two readings", "s")`) and round
  * ticks through ./scale (`niceScale(values)` → domain, ticks, format). A `legend` (./legend
@@ -31,7 +19,6 @@ import { useId, type ReactNode } from "react";
 /** Columns of numbers (also numbers already formatted, "−1.200") line up on the right. */
 const numeric = (v: string | number) => typeof v === "number" || /^[−+-]?\d[\d.,\u202f]*( \S+)?$/.test(v);
 
->>>>>>> agreement
 export interface ChartTable {
   caption?: string;
   columns: string[];
@@ -56,10 +43,7 @@ export function ChartFigure({
   children: ReactNode;
 }) {
   const descId = useId();
-<<<<<<< HEAD
-=======
   const right = table.columns.map((_, j) => table.rows.length > 0 && table.rows.every((r) => numeric(r[j])));
->>>>>>> agreement
   const alt = label ?? (description ? `${title}. ${description}` : title);
   return (
     <figure className="space-y-3 rounded-lg border border-ink-100 bg-white p-4 shadow-sm">
@@ -77,21 +61,13 @@ export function ChartFigure({
           <table className="w-full text-left text-sm">
             <caption className="sr-only">{table.caption ?? title}</caption>
             <thead className="sticky top-0 bg-ink-50 text-ink-600">
-<<<<<<< HEAD
-              <tr>{table.columns.map((c) => <th key={c} scope="col" className="px-3 py-2 font-semibold">{c}</th>)}</tr>
-=======
               <tr>{table.columns.map((c, i) => <th key={c} scope="col" className={`px-3 py-2 font-semibold ${right[i] ? "text-right" : ""}`}>{c}</th>)}</tr>
->>>>>>> agreement
             </thead>
             <tbody>
               {table.rows.map((row, i) => (
                 <tr key={i} className="border-t border-ink-100">
                   {row.map((v, j) => (
-<<<<<<< HEAD
-                    <td key={j} className={`px-3 py-1.5 ${typeof v === "number" ? "text-right tabular-nums" : ""}`}>{String(v)}</td>
-=======
                     <td key={j} className={`px-3 py-1.5 ${right[j] ? "text-right tabular-nums" : ""}`}>{String(v)}</td>
->>>>>>> agreement
                   ))}
                 </tr>
               ))}
