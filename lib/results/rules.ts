@@ -1,4 +1,4 @@
-import type { Criterion } from "../editions/schema";
+import type { EditionValues } from "../editions/schema";
 import { dixonQ } from "../stats";
 import { judgeSubmission, type SubmissionDecision } from "./decision";
 
@@ -9,15 +9,10 @@ import { judgeSubmission, type SubmissionDecision } from "./decision";
 export const DIXON_CONFIDENCE = 0.95;
 
 /** The edition's values a result is judged by. */
-export interface ResultLimits {
-  minAbsorptionS: number;
-  criterion: Criterion;
-  dropsPerBall: number;
-  guardBandS: number;
-  roundSizes: number[];
-  toleranceCoverage: number;
-  toleranceConfidence: number;
-}
+export type ResultLimits = Pick<
+  EditionValues,
+  "minAbsorptionS" | "criterion" | "dropsPerBall" | "guardBandS" | "roundSizes" | "toleranceCoverage" | "toleranceConfidence"
+>;
 
 export interface DropInput {
   id: string;

@@ -24,6 +24,7 @@ beforeAll(async () => {
   browser = await launch();
   page = await (await browser.newContext({ viewport: { width: 1440, height: 1000 } })).newPage();
   await signInAs(page, demo.email("lead"), demo.password);
+  await page.waitForURL(`${APP_URL}/overview`);
 }, 900_000);
 afterAll(async () => {
   await browser?.close();

@@ -5,6 +5,7 @@ import type { ResultsView } from "@/app/_client/results";
 import { referenceLabel, xAxisLabel, yAxisLabel } from "@/components/charts/axis-label";
 import { ChartFigure } from "@/components/charts/chart-figure";
 import { ReferenceLegend } from "@/components/charts/legend";
+import { niceScale } from "@/components/charts/scale";
 import { AXIS, CHART_MARGIN, CHART_ROOT, GRID, PALETTE, REFERENCE, SERIES } from "@/components/charts/theme";
 
 interface Point {
@@ -22,9 +23,7 @@ export function DropDotPlot({ balls, edition }: Pick<ResultsView, "balls" | "edi
   );
   const L = edition.minAbsorptionS;
   const top = L + edition.guardBandS;
-  const ys = [...points.map((p) => p.y), L, top];
-  const pad = Math.max(1, (Math.max(...ys) - Math.min(...ys)) * 0.08);
-  const domain: [number, number] = [Math.floor(Math.min(...ys) - pad), Math.ceil(Math.max(...ys) + pad)];
+  const y = niceScale([...points.map((p) => p.y), L, top]);
   const serial = (x: number) => balls[x - 1]?.serial ?? "";
   return (
     <ChartFigure
@@ -36,7 +35,7 @@ export function DropDotPlot({ balls, edition }: Pick<ResultsView, "balls" | "edi
       <ScatterChart {...CHART_ROOT} margin={{ ...CHART_MARGIN, bottom: 56 }}>
         <CartesianGrid {...GRID} />
         <XAxis type="number" dataKey="x" domain={[0.5, balls.length + 0.5]} ticks={balls.map((_, i) => i + 1)} tickFormatter={serial} interval={0} angle={-40} textAnchor="end" height={64} {...AXIS} label={{ ...xAxisLabel("Ball", "serial"), offset: -48 }} />
-        <YAxis type="number" dataKey="y" domain={domain} allowDecimals {...AXIS} label={yAxisLabel("Drop time", "s")} width={72} />
+        <YAxis type="number" dataKey="y" domain={y.domain} ticks={y.ticks} tickFormatter={y.format} {...AXIS} label={yAxisLabel("Drop time", "s")} width={72} />
         <ReferenceArea y1={L} y2={top} fill={PALETTE.wick300} fillOpacity={0.18} ifOverflow="extendDomain" />
         <ReferenceLine y={L} {...REFERENCE.minimum} label={referenceLabel(`min ${L} s`, REFERENCE.minimum.stroke)} />
         <ReferenceLine y={top} {...REFERENCE.guard} label={referenceLabel(`${top} s`, PALETTE.ink600)} />

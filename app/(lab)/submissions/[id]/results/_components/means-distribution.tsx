@@ -2,9 +2,10 @@
 
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceLine, Scatter, XAxis, YAxis } from "recharts";
 import type { ResultsView } from "@/app/_client/results";
-import { referenceLabel, xAxisLabel, yAxisLabel } from "@/components/charts/axis-label";
+import { xAxisLabel, yAxisLabel } from "@/components/charts/axis-label";
 import { ChartFigure } from "@/components/charts/chart-figure";
 import { ReferenceLegend } from "@/components/charts/legend";
+import { niceScale } from "@/components/charts/scale";
 import { AXIS, CHART_MARGIN, CHART_ROOT, GRID, PALETTE, REFERENCE, SERIES } from "@/components/charts/theme";
 import { stackDots } from "./stack-dots";
 
@@ -21,14 +22,16 @@ export function MeansDistribution({ balls, edition, decision }: Pick<ResultsView
   const top = L + edition.guardBandS;
   const { dots, bin } = stackDots(values);
   const edges = [...values.map((v) => v.value), L, top, ...(t ? [t.limit, t.mean - 3 * t.sd, t.mean + 3 * t.sd] : [])];
-  const pad = Math.max(1, (Math.max(...edges) - Math.min(...edges)) * 0.05);
-  const domain: [number, number] = [Math.floor(Math.min(...edges) - pad), Math.ceil(Math.max(...edges) + pad)];
+  const x = niceScale(edges);
+  const domain = x.domain;
   const curve = t && t.sd > 0
     ? Array.from({ length: 81 }, (_, i) => {
         const x = domain[0] + ((domain[1] - domain[0]) * i) / 80;
         return { x, fit: values.length * bin * density(x, t.mean, t.sd) };
       })
     : [];
+  // Whole balls on the y axis, with room above the highest stack and the fitted curve's peak.
+  const yTop = Math.max(2, Math.ceil(Math.max(0, ...dots.map((d) => d.y + 0.5), ...curve.map((c) => c.fit)) + 1));
   const what = edition.criterion === "every_drop" ? "shortest drop" : "mean";
   return (
     <ChartFigure
@@ -47,12 +50,12 @@ export function MeansDistribution({ balls, edition, decision }: Pick<ResultsView
     >
       <ComposedChart {...CHART_ROOT} margin={CHART_MARGIN}>
         <CartesianGrid {...GRID} />
-        <XAxis type="number" dataKey="x" domain={domain} allowDataOverflow {...AXIS} label={xAxisLabel(`Ball ${what}`, "s")} />
-        <YAxis type="number" allowDecimals={false} domain={[0, (max: number) => Math.max(2, Math.ceil(max) + 1)]} {...AXIS} label={yAxisLabel(`Balls per ${bin} s`, "count")} width={72} />
+        <XAxis type="number" dataKey="x" domain={domain} ticks={x.ticks} tickFormatter={x.format} allowDataOverflow {...AXIS} label={xAxisLabel(`Ball ${what}`, "s")} />
+        <YAxis type="number" allowDecimals={false} domain={[0, yTop]} ticks={Array.from({ length: yTop + 1 }, (_, i) => i)} {...AXIS} label={yAxisLabel(`Balls per ${bin} s`, "count")} width={72} />
         <ReferenceArea x1={L} x2={top} fill={PALETTE.wick300} fillOpacity={0.18} />
-        <ReferenceLine x={L} {...REFERENCE.minimum} label={{ ...referenceLabel(`min ${L} s`, REFERENCE.minimum.stroke), position: "insideTopLeft" }} />
+        <ReferenceLine x={L} {...REFERENCE.minimum} />
         <ReferenceLine x={top} {...REFERENCE.guard} />
-        {t && <ReferenceLine x={t.limit} {...REFERENCE.limit} label={{ ...referenceLabel("tolerance limit", REFERENCE.limit.stroke), position: "insideTopRight" }} />}
+        {t && <ReferenceLine x={t.limit} {...REFERENCE.limit} />}
         {curve.length > 0 && <Line data={curve} dataKey="fit" type="monotone" dot={false} stroke={REFERENCE.centre.stroke} strokeWidth={2} isAnimationActive={false} />}
         <Scatter data={dots} dataKey="y" fill={SERIES[0].colour} shape="circle" isAnimationActive={false} />
       </ComposedChart>
