@@ -19,7 +19,10 @@ export function limitSecs(v: number): string {
 
 /** 0.95 → "95 %", 0.999 → "99.9 %", 0.0042 with 2 digits → "0.42 %". */
 export function pct(p: number, digits = 1): string {
-  return `${Number((p * 100).toFixed(digits)).toString()} %`;
+  const shown = Number((p * 100).toFixed(digits));
+  // A small fraction is not none: say how small instead of rounding it to zero.
+  if (shown === 0 && p > 0) return `less than ${(10 ** -digits).toFixed(digits)} %`;
+  return `${shown.toString()} %`;
 }
 
 /** What the criterion judges for a ball, in words: "ball mean" or "shortest drop". */

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ballResult, submissionResults, type BallInput, type ResultLimits } from "@/lib/results/rules";
+import { pct } from "@/lib/results/words";
 import { toleranceFactor } from "@/lib/stats";
 
 // The staged decision, branch by branch, on an example edition: 135 s minimum, 10 s guard band,
@@ -69,6 +70,15 @@ describe("ball results", () => {
   });
 });
 
+describe("words", () => {
+  it("says a tiny fraction is small rather than none", () => {
+    expect(pct(0.0000042, 2)).toBe("less than 0.01 %");
+    expect(pct(0, 2)).toBe("0 %");
+    expect(pct(0.0264, 2)).toBe("2.64 %");
+    expect(pct(0.95)).toBe("95 %");
+  });
+});
+
 describe("the staged submission decision", () => {
   it("all clear after round 1: meets the limit", () => {
     const { decision } = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 152)], 1);
@@ -116,7 +126,7 @@ describe("the staged submission decision", () => {
     expect(t.mean).toBeCloseTo(146, 10);
     expect(t.limit).toBeCloseTo(146 - t.k * t.sd, 10);
     expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "tolerance limit", finalRound: true });
-    expect(decision.explanation).toMatch(/^10 balls; lower 90 %\/95 % tolerance limit 13\d\.\d s is at or above the 135 s minimum; estimated fraction of balls below the minimum \d+(\.\d+)? %\.$/);
+    expect(decision.explanation).toMatch(/^10 balls; lower 90 %\/95 % tolerance limit 13\d\.\d s is at or above the 135 s minimum; estimated fraction of balls below the minimum (\d+(\.\d+)?|less than 0\.01) %\.$/);
   });
 
   it("final judgement fails when the lower tolerance limit is below the minimum", () => {

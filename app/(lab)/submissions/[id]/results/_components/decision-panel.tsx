@@ -1,9 +1,8 @@
 import { s1, type ResultsView } from "@/app/_client/results";
 import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
+import { pct } from "@/lib/results/words";
 import { DecisionBadge } from "./ball-status";
-
-const pct = (p: number, digits = 1) => `${Number((p * 100).toFixed(digits))} %`;
 
 /** The decision, why, what comes next, and the tolerance figures behind it. */
 export function DecisionPanel({ decision: d, edition }: Pick<ResultsView, "decision" | "edition">) {
