@@ -1,5 +1,6 @@
 import type { EditionValues } from "../editions/schema";
 import { dixonQ } from "../stats";
+import { meanAndSd } from "../stats/sample";
 import { judgeSubmission, type SubmissionDecision } from "./decision";
 
 // Drop, ball and submission results from settled drop times. Pure: the same inputs always give
@@ -64,8 +65,6 @@ export interface ResultSet {
   decision: SubmissionDecision;
 }
 
-const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
-
 function pendingReason(b: BallInput): string | null {
   if (!b.run) return "not tested yet";
   if (b.run.needsAcceptance) return "its run's conditions wait for a lead to accept them";
@@ -101,8 +100,7 @@ export function ballResult(b: BallInput, limits: ResultLimits): BallResult {
   }
   const times = drops.map((d) => d.timeS as number);
   const n = times.length;
-  const mean = sum(times) / n;
-  const sd = n > 1 ? Math.sqrt(sum(times.map((t) => (t - mean) ** 2)) / (n - 1)) : null;
+  const { mean, sd } = n > 1 ? meanAndSd(times) : { mean: times[0], sd: null };
   const min = Math.min(...times);
   const max = Math.max(...times);
   const value = limits.criterion === "every_drop" ? min : mean;

@@ -8,8 +8,8 @@ export function secs(v: number, digits = 1): string {
 
 /** A value compared with a limit: one decimal, more when one would round it onto the limit. */
 export function secsAgainst(v: number, limit: number): string {
-  for (const digits of [1, 2, 3]) if (Number(v.toFixed(digits)) !== limit || digits === 3) return secs(v, digits);
-  return secs(v);
+  const digits = [1, 2].find((d) => Number(v.toFixed(d)) !== limit) ?? 3;
+  return secs(v, digits);
 }
 
 /** An edition's value as set: 135 → "135 s", 0.3 → "0.3 s". */

@@ -106,6 +106,9 @@ describe("results of a submission read through the API", () => {
     const other = await makeUser(["manufacturer"], { organisationId: otherOrganisationId });
     const hidden = await (await signedIn(other.email, other.password)).get(`/api/submissions/${submissionId}/results`);
     const missing = await lead.get("/api/submissions/00000000-0000-0000-0000-000000000000/results");
+    // A malformed id is the same "no such submission", never a database error.
+    const malformed = await lead.get("/api/submissions/not-an-id/results");
+    expect(malformed.status).toBe(404);
     expect([hidden.status, missing.status]).toEqual([404, 404]);
     expect((await hidden.json()).error.message).toBe((await missing.json()).error.message);
   });

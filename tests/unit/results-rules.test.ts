@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ballResult, submissionResults, type BallInput, type ResultLimits } from "@/lib/results/rules";
-import { pct } from "@/lib/results/words";
+import { pct, secsAgainst } from "@/lib/results/words";
 import { toleranceFactor } from "@/lib/stats";
 
 // The staged decision, branch by branch, on an example edition: 135 s minimum, 10 s guard band,
@@ -76,6 +76,12 @@ describe("words", () => {
     expect(pct(0, 2)).toBe("0 %");
     expect(pct(0.0264, 2)).toBe("2.64 %");
     expect(pct(0.95)).toBe("95 %");
+  });
+
+  it("shows a limit with more decimals only when one decimal would round it onto the minimum", () => {
+    expect(secsAgainst(138.26, 135)).toBe("138.3 s");
+    expect(secsAgainst(134.96, 135)).toBe("134.96 s");
+    expect(secsAgainst(134.996, 135)).toBe("134.996 s");
   });
 });
 
