@@ -135,6 +135,9 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
   "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
+  "GET /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, expect: clipReaders(200) },
+  // The lead passes the gate and is told why this unread drop cannot be ruled.
+  "POST /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, body: () => ({ chosen: "first", reason: "Matrix ruling reason." }), expect: leadOnly(409) },
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
   "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },
