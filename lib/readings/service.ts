@@ -3,6 +3,7 @@ import { recordChange } from "../audit/record";
 import { findFrameIndex } from "../clips/index-queries";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
+import { assertUnlocked } from "../signoff/lock";
 import { findDrop, findDropOfReadingForUpdate, updateDropOutcome, type DropRow } from "./drop-queries";
 import { assertCanSeeDrops, assertReviewer, canSeeReading, isBlindFor } from "./policy";
 import { deleteDraft, findReading, insertReading, listReadingsOfDrop, markSubmitted, updateDraftMarks, type ReadingRow } from "./queries";
@@ -48,6 +49,7 @@ export async function startReading(actor: Actor, dropId: string, marks: MarksInp
   assertReviewer(actor, "read drops");
   return db().transaction(async (trx) => {
     const drop = await lockedDrop(actor, trx, dropId);
+    await assertUnlocked(trx, drop.submissionId);
     if (!drop.clipId) throw new AppError("conflict", "This drop is not placed on a clip yet: a technician places it first.");
     const readings = await listReadingsOfDrop(trx, dropId);
     const mine = readings.filter((r) => r.reviewerId === actor.id);
@@ -105,6 +107,7 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
     const r = readings.find((x) => x.id === id);
     if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     if (r.status !== "draft") throw new AppError("conflict", "This reading is already submitted.");
+    await assertUnlocked(trx, drop.submissionId);
     if (r.dispenseFrame === null || r.clearFrame === null) throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
     assertReadable(drop, r.clipId);
     if (r.supersedesId && currentReadings(readings).length >= 2) throw new AppError("conflict", BOTH_IN);
@@ -138,6 +141,7 @@ export async function correctReading(actor: Actor, id: string, reason: string): 
     if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     const current = currentReadings(readings);
     if (r.status !== "submitted") throw new AppError("conflict", "This reading is still a draft: change its marks directly.");
+    await assertUnlocked(trx, drop.submissionId);
     if (current.length >= 2) throw new AppError("conflict", BOTH_IN);
     if (!current.some((c) => c.id === r.id)) throw new AppError("conflict", "This reading was already replaced by a correction.");
     if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft")) throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");

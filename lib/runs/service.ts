@@ -4,6 +4,7 @@ import { db, type Db } from "../db";
 import { findEdition } from "../editions/queries";
 import { AppError } from "../errors";
 import { findSample } from "../samples/queries";
+import { assertUnlocked } from "../signoff/lock";
 import { visibleSample } from "../samples/service";
 import { assertCanEditIntake, assertLead, assertVisible } from "../submissions/policy";
 import { findSubmission, updateSubmissionRow } from "../submissions/queries";
@@ -42,6 +43,7 @@ export async function recordRun(actor: Actor, sampleId: string, v: RunValues): P
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
     const submission = (await findSubmission(trx, sample.submissionId))!;
+    await assertUnlocked(trx, submission.id);
     const edition = (await findEdition(trx, submission.editionId))!;
     const id = await insertRun(trx, sampleId, actor.id, toColumns(v), edition.dropsPerBall);
     if (submission.status === "received") await updateSubmissionRow(trx, submission.id, { status: "testing" });
@@ -56,9 +58,10 @@ export async function getRun(actor: Actor, id: string): Promise<RunDetail> {
 }
 
 export async function updateRun(actor: Actor, id: string, v: RunValues): Promise<RunDetail> {
-  await visibleRun(actor, id);
+  const run = await visibleRun(actor, id);
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
+    await assertUnlocked(trx, (await findSample(trx, run.sampleId))!.submissionId);
     const before = await viewOf(trx, (await findRun(trx, id))!);
     await updateRunRow(trx, id, toColumns(v));
     const after = await viewOf(trx, (await findRun(trx, id))!);
@@ -69,9 +72,10 @@ export async function updateRun(actor: Actor, id: string, v: RunValues): Promise
 
 /** A lead accepts a run whose conditions are flagged, with a written reason. */
 export async function acceptRun(actor: Actor, id: string, reason: string): Promise<RunDetail> {
-  await visibleRun(actor, id);
+  const run = await visibleRun(actor, id);
   assertLead(actor, "accept a run with flagged conditions");
   return db().transaction(async (trx) => {
+    await assertUnlocked(trx, (await findSample(trx, run.sampleId))!.submissionId);
     const before = await viewOf(trx, (await findRun(trx, id))!);
     if (before.flags.length === 0) throw new AppError("conflict", "This run's conditions raise no warning, so there is nothing to accept.");
     if (before.acceptedAt) throw new AppError("conflict", `This run was already accepted by ${before.acceptedByName}.`);

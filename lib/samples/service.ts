@@ -5,6 +5,7 @@ import { db } from "../db";
 import { AppError } from "../errors";
 import { assertCanEditIntake, assertVisible } from "../submissions/policy";
 import { findSubmission, lockSubmission } from "../submissions/queries";
+import { assertUnlocked } from "../signoff/lock";
 import { visibleSubmission } from "../submissions/service";
 import { toGrams } from "../units/rules";
 import { parseSampleCsv, type CsvRowError } from "./csv";
@@ -27,6 +28,7 @@ export async function addSample(actor: Actor, submissionId: string, v: Values<ty
   const submission = await visibleSubmission(actor, submissionId);
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
+    await assertUnlocked(trx, submissionId);
     const [id] = await insertSamples(trx, submissionId, [
       { serial: v.serial, weightG: toGrams(v.weight.value, v.weight.unit), round: v.round ?? submission.currentRound, receivedAt: v.receivedAt, acclimationStartedAt: v.acclimationStartedAt ?? null, notes: v.notes },
     ]);
@@ -44,6 +46,7 @@ export async function importSamples(actor: Actor, submissionId: string, v: Value
   if (!parsed.ok) throw csvError(parsed.errors);
   return db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
+    await assertUnlocked(trx, submissionId);
     const taken = new Set((await existingSerials(trx, submissionId, parsed.rows.map((r) => r.serial))).map((s) => s.toLowerCase()));
     const clashes = parsed.rows.filter((r) => taken.has(r.serial.toLowerCase())).map((r) => ({ line: r.line, reason: `Serial ${r.serial} is already recorded for this submission.` }));
     if (clashes.length) throw csvError(clashes);
@@ -74,6 +77,7 @@ export async function updateSample(actor: Actor, id: string, v: Values<typeof sa
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
     const before = (await findSample(trx, id))!;
+    await assertUnlocked(trx, before.submissionId);
     await updateSampleRow(trx, id, {
       serial: v.serial,
       weightG: v.weight ? toGrams(v.weight.value, v.weight.unit) : undefined,
@@ -92,6 +96,7 @@ export async function deleteSample(actor: Actor, id: string): Promise<{ deleted:
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
     const before = (await findSample(trx, id))!;
+    await assertUnlocked(trx, before.submissionId);
     if (before.runCount > 0) throw new AppError("conflict", `Sample ${before.serial} has ${before.runCount} run(s) recorded and cannot be deleted.`);
     await deleteSampleRow(trx, id);
     await recordChange(trx, actor, { action: "sample.deleted", entity: "sample", entityId: id, before: snapshot(before) });

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/lib/db";
 import type { Role } from "@/lib/users/rules";
 import { Client, signedIn } from "../helpers/app";
-import { demo, demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixtures";
+import { demo, demoOrganisationId, makeUser, PASSWORD, uniqueEmail } from "../helpers/fixtures";
 import { uploadFile, waitForClip } from "../helpers/clips";
 import { plainMp4 } from "../helpers/media";
 import { editionBody, goodRun, newEdition, newRun, newSample, newSubmission, today, uniqueName } from "../helpers/intake";
@@ -135,6 +135,14 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
   "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
+  "GET /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, expect: clipReaders(200) },
+  // The lead passes the gate and is told why this unread drop cannot be ruled.
+  "POST /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, body: () => ({ chosen: "first", reason: "Matrix ruling reason." }), expect: leadOnly(409) },
+  "GET /api/submissions/[id]/signoff": { path: async () => `/api/submissions/${await submission()}/signoff`, expect: leadOnly(200) },
+  // A new submission has no results to sign, and nothing signed to re-open: the lead is told so.
+  "POST /api/submissions/[id]/signoff": { path: async () => `/api/submissions/${await submission()}/signoff`, body: () => ({ password: PASSWORD }), expect: leadOnly(409) },
+  "POST /api/submissions/[id]/reopen": { path: async () => `/api/submissions/${await submission()}/reopen`, body: () => ({ reason: "Matrix re-opening reason." }), expect: leadOnly(409) },
+  "GET /api/audit": { path: "/api/audit?pageSize=5", expect: leadOnly(200) },
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
   "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },

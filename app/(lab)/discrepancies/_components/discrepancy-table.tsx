@@ -7,7 +7,7 @@ import { useDiscrepancies, type DropView } from "@/app/_client/drops";
 import { seconds } from "@/app/_client/clip-words";
 import { countingReadings, signedSeconds } from "./reading-numbers";
 
-const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "Difference (second − first)", "Tolerance", "Since"];
+const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "Difference (second − first)", "Tolerance", "Since", "Ruling"];
 
 function Reading({ r }: { r: DropView["readings"][number] | undefined }) {
   if (!r || r.timeS === null) return <span className="text-ink-600">—</span>;
@@ -60,6 +60,9 @@ export function DiscrepancyTable() {
                 </td>
                 <td className="whitespace-nowrap px-3 py-2">±{seconds(d.readingToleranceS)}</td>
                 <td className="whitespace-nowrap px-3 py-2">{d.stateChangedAt ? <LocalTime iso={d.stateChangedAt} /> : "—"}</td>
+                <td className="whitespace-nowrap px-3 py-2">
+                  <Link href={`/drops/${d.id}/ruling`} className="font-semibold text-wick-700 underline">Rule<span className="sr-only"> on drop {d.ordinal} of sample {d.sampleSerial}</span></Link>
+                </td>
               </tr>
             );
           })}

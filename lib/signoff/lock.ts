@@ -1,0 +1,26 @@
+import type { Db } from "../db";
+import { AppError } from "../errors";
+import { listReopenings, listSignatures } from "./queries";
+import { lockReason } from "./rules";
+
+/**
+ * Refuses a change to a submission's records while its revision in force is signed off. Call it
+ * inside the changing transaction, after locking the record being changed.
+ */
+export async function assertUnlocked(q: Db, submissionId: string): Promise<void> {
+  const signed = await listSignatures(q, submissionId);
+  if (signed.length === 0) return;
+  const sub = await q("submissions").where({ id: submissionId }).first("reference");
+  const reason = lockReason({
+    reference: sub?.reference ?? "",
+    signedRevisions: signed.map((s) => s.revision),
+    reopenedRevisions: (await listReopenings(q, submissionId)).map((r) => r.revision),
+  });
+  if (reason) throw new AppError("conflict", reason);
+}
+
+/** The submission a drop belongs to. */
+export async function submissionOfDrop(q: Db, dropId: string): Promise<string | undefined> {
+  const r = await q("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id").where("d.id", dropId).first("s.submission_id");
+  return r?.submission_id;
+}
