@@ -5,6 +5,16 @@ import { CRITERION_LABELS } from "../editions/schema";
 
 export const fixed = (v: number | null | undefined, digits: number): string => (v === null || v === undefined ? "—" : v.toFixed(digits));
 
+/** "2026-12-02 05:40" (UTC) from an ISO 8601 time, for columns headed "UTC". */
+export const utcShort = (iso: string | null | undefined): string => (iso ? `${iso.slice(0, 10)} ${iso.slice(11, 16)}` : "—");
+
+/** A frame rate for people: "30000/1001" → "29.97", "10/1" → "10". */
+export function frameRate(nominal: string | null, average: number | null): string {
+  const [n, d] = (nominal ?? "").split("/").map(Number);
+  const v = n && d ? n / d : average;
+  return v ? String(Number(v.toFixed(3))) : "—";
+}
+
 /** "2026-12-02 05:40 UTC" from an ISO 8601 time. */
 export const utc = (iso: string | null | undefined): string => (iso ? `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC` : "—");
 

@@ -30,7 +30,8 @@ export function ensureRoom(doc: Doc, height: number): void {
 }
 
 export function heading(doc: Doc, text: string): void {
-  ensureRoom(doc, 60);
+  // A heading never ends a page: it keeps room for a table head and a few rows below it.
+  ensureRoom(doc, 90);
   doc.moveDown(0.8).font(BOLD).fontSize(12).fillColor(INK).text(text, MARGIN.left, doc.y, { width: contentWidth(doc) });
   doc.moveDown(0.3).font(REGULAR).fontSize(9);
 }
@@ -121,8 +122,8 @@ export function furnish(doc: Doc, header: { lab: string; title: string; referenc
     const w = contentWidth(doc);
     const saved = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
-    doc.font(BOLD).fontSize(9).fillColor(INK).text(header.lab, MARGIN.left, 30, { width: w / 2, lineBreak: false });
-    doc.font(REGULAR).fontSize(9).text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w / 2, 30, { width: w / 2, align: "right", lineBreak: false });
+    doc.font(BOLD).fontSize(9).fillColor(INK).text(header.lab, MARGIN.left, 30, { width: w * 0.4, lineBreak: false, ellipsis: true });
+    doc.font(REGULAR).fontSize(9).text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w * 0.4, 30, { width: w * 0.6, align: "right", lineBreak: false });
     doc.moveTo(MARGIN.left, 46).lineTo(MARGIN.left + w, 46).lineWidth(0.6).strokeColor(RULE).stroke();
     const fy = doc.page.height - 56;
     doc.moveTo(MARGIN.left, fy - 4).lineTo(MARGIN.left + w, fy - 4).lineWidth(0.6).strokeColor(RULE).stroke();

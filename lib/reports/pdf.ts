@@ -1,6 +1,6 @@
 import { formatTemperature } from "../units/rules";
 import type { ReportData } from "./data";
-import { CAUTION, editionRows, fixed, utc } from "./format";
+import { CAUTION, editionRows, fixed, frameRate, utc, utcShort } from "./format";
 import { box, facts, furnish, heading, newDoc, paragraph, table, toBuffer, MUTED, type Doc } from "./pdf-layout";
 
 // The test report as a PDF: one reader's walk from the submission to the decision and its evidence.
@@ -8,8 +8,9 @@ import { box, facts, furnish, heading, newDoc, paragraph, table, toBuffer, MUTED
 const TITLE = "Oil absorption test report";
 const STATUS_WORDS = { meets: "meets", close: "close", below: "below", pending: "pending" } as const;
 
-function revisionOf(r: ReportData): string {
-  return r.signOff.signature ? `Revision ${r.signOff.signature.revision}` : "Draft, not signed off";
+function revisionOf(r: ReportData, short = false): string {
+  if (r.signOff.signature) return `Revision ${r.signOff.signature.revision}`;
+  return short ? "Draft" : "Draft, not signed off";
 }
 
 function front(doc: Doc, r: ReportData): void {
@@ -45,22 +46,25 @@ function edition(doc: Doc, r: ReportData): void {
 
 function samples(doc: Doc, r: ReportData): void {
   heading(doc, "Rounds, samples and run conditions");
-  const rows = r.samples.map((x) => [
-    x.serial, String(x.round), fixed(x.weightG, 2), fixed(x.weightLb, 3), x.run ? utc(x.run.testedAt) : "not tested",
-    x.run ? fixed(x.run.surfaceTempC, 1) : "—", x.run ? fixed(x.run.roomTempC, 1) : "—", fixed(x.run?.roughness.mean, 3), fixed(x.run?.acclimationH, 1),
-    x.run ? (x.run.flags.length ? (x.run.acceptedAt ? "flagged, accepted" : "flagged") : "none") : "—",
-  ]);
+  const tested = r.samples.filter((x) => x.run);
   table(doc, [
-    { head: "Ball", width: 62 }, { head: "Round", width: 34, align: "right" }, { head: "Weight g", width: 48, align: "right" }, { head: "Weight lb", width: 46, align: "right" },
-    { head: "Tested", width: 82 }, { head: "Surface °C", width: 46, align: "right" }, { head: "Room °C", width: 40, align: "right" },
-    { head: "Ra mean µm", width: 46, align: "right" }, { head: "Acclim. h", width: 40, align: "right" }, { head: "Flags", width: 55 },
-  ], rows);
-  for (const x of r.samples) {
-    if (!x.run) continue;
-    const run = x.run;
-    const notes = [...run.flags.map((f) => f.message), ...(run.acceptedAt ? [`Accepted by ${run.acceptedByName} on ${utc(run.acceptedAt)}: ${run.acceptReason}`] : [])];
+    { head: "Ball", width: 64 }, { head: "Round", width: 34, align: "right" }, { head: "Weight g", width: 48, align: "right" }, { head: "Weight lb", width: 46, align: "right" },
+    { head: "Tested (UTC)", width: 78 }, { head: "Surface °C", width: 46, align: "right" }, { head: "Room °C", width: 40, align: "right" },
+    { head: "Ra mean µm", width: 46, align: "right" }, { head: "Acclim. h", width: 40, align: "right" }, { head: "Flags", width: 57 },
+  ], r.samples.map((x) => [
+    x.serial, String(x.round), fixed(x.weightG, 2), fixed(x.weightLb, 3), x.run ? utcShort(x.run.testedAt) : "not tested",
+    fixed(x.run?.surfaceTempC, 1), fixed(x.run?.roomTempC, 1), fixed(x.run?.roughness.mean, 3), fixed(x.run?.acclimationH, 1),
+    x.run ? (x.run.flags.length ? (x.run.acceptedAt ? "flagged, accepted" : "flagged") : "none") : "—",
+  ]));
+  doc.moveDown(0.6);
+  table(doc, [{ head: "Ball", width: 64 }, { head: "Technician", width: 90 }, { head: "Preparation", width: 165 }, { head: "Oil lot", width: 70 }, { head: "Camera", width: 50 }, { head: "Dispenser check", width: 60, align: "right" }],
+    tested.map(({ serial, run }) => [serial, run!.technicianName, [run!.prepMethod, run!.prepAbrasive, run!.prepPadPosition].filter(Boolean).join("; "), run!.oilLot, run!.cameraId,
+      run!.dispenserCheckValue === null ? "—" : `${run!.dispenserCheckValue} ${run!.dispenserCheckUnit === "uL" ? "µL" : "mg"}`]));
+  for (const { serial, run } of tested) {
+    if (!run!.flags.length) continue;
+    const accepted = run!.acceptedAt ? ` Accepted by ${run!.acceptedByName} on ${utc(run!.acceptedAt)}: ${run!.acceptReason}` : " Not accepted: the ball's result waits for a lead.";
     doc.moveDown(0.3);
-    paragraph(doc, `${x.serial}: technician ${run.technicianName}; surface ${formatTemperature(run.surfaceTempC)}; preparation ${run.prepMethod}, ${run.prepAbrasive}; oil lot ${run.oilLot}; camera ${run.cameraId}.${notes.length ? " " + notes.join(" ") : ""}`, { size: 8 });
+    paragraph(doc, `${serial} (${formatTemperature(run!.surfaceTempC)} surface): ${run!.flags.map((f) => f.message).join(" ")}${accepted}`, { size: 8 });
   }
 }
 
@@ -84,20 +88,21 @@ function dropsTable(doc: Doc, r: ReportData): void {
     const [a, b] = [d.readings.find((x) => x.slot === 1), d.readings.find((x) => x.slot === 2)];
     return [
       d.serial, String(d.ordinal), d.state, a ? String(a.dispenseFrame) : "—", a ? String(a.clearFrame) : "—", b ? String(b.dispenseFrame) : "—", b ? String(b.clearFrame) : "—",
-      fixed(d.timeS, 3), fixed(d.uncertaintyS, 3), d.readings.map((x) => x.reader).join(", ") || "—", d.outlier ? "Q flag" : "",
+      fixed(d.timeS, 3), fixed(d.uncertaintyS, 3), d.readings.map((x) => x.reader).join("; ") || "—", d.outlier ? "Q" : "",
     ];
   });
   table(doc, [
-    { head: "Ball", width: 58 }, { head: "Drop", width: 28, align: "right" }, { head: "State", width: 44 },
-    { head: "1st dispense frame", width: 46, align: "right" }, { head: "1st clear frame", width: 40, align: "right" },
-    { head: "2nd dispense frame", width: 46, align: "right" }, { head: "2nd clear frame", width: 40, align: "right" },
-    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 40, align: "right" }, { head: "Readers", width: 90 }, { head: "", width: 25 },
+    { head: "Ball", width: 52 }, { head: "Drop", width: 26, align: "right" }, { head: "State", width: 40 },
+    { head: "1st dispense frame", width: 42, align: "right" }, { head: "1st clear frame", width: 38, align: "right" },
+    { head: "2nd dispense frame", width: 42, align: "right" }, { head: "2nd clear frame", width: 38, align: "right" },
+    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 38, align: "right" }, { head: "Readers (1st; 2nd)", width: 114 }, { head: "Dixon", width: 27 },
   ], r.drops.length ? rows : [["No drops yet", "", "", "", "", "", "", "", "", "", ""]]);
+  paragraph(doc, "Frames are 0-based frame numbers of the drop's recording. Time: the agreed or ruled time. U: the larger expanded frame-quantisation uncertainty of the two readings. Q: the drop Dixon's Q flags; it still counts.", { size: 7.5, color: MUTED });
 }
 
 function clips(doc: Doc, r: ReportData): void {
   heading(doc, "Recordings");
-  const rows = r.clips.map((c) => [c.originalName, String(c.frameCount ?? "—"), c.rate ?? fixed(c.averageRate, 3), c.sha256 ?? "not hashed"]);
+  const rows = r.clips.map((c) => [c.originalName, String(c.frameCount ?? "—"), frameRate(c.rate, c.averageRate), c.sha256 ?? "not hashed"]);
   table(doc, [{ head: "File", width: 120 }, { head: "Frames", width: 40, align: "right" }, { head: "Rate fps", width: 52, align: "right" }, { head: "SHA-256", width: 287 }], rows.length ? rows : [["No recordings", "", "", ""]], 7);
 }
 
@@ -120,6 +125,6 @@ function signOff(doc: Doc, r: ReportData): void {
 export async function renderReportPdf(r: ReportData): Promise<Buffer> {
   const doc = newDoc(`${TITLE} ${r.submission.reference}`);
   for (const part of [front, edition, samples, balls, dropsTable, clips, signOff]) part(doc, r);
-  furnish(doc, { lab: r.labName, title: TITLE, reference: r.submission.reference, revision: revisionOf(r) }, CAUTION);
+  furnish(doc, { lab: r.labName, title: TITLE, reference: r.submission.reference, revision: revisionOf(r, true) }, CAUTION);
   return toBuffer(doc);
 }
