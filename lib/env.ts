@@ -28,6 +28,8 @@ export const envSchema = z.object({
   CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts"),
   CLIP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(2 * 3600),
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(60),
+  // The lab named in the header of every test report.
+  LAB_NAME: z.string().min(1).max(120).default("Ball testing laboratory"),
   // The benchmark's baseline route (one insert) answers only when this is on.
   BENCH_ROUTES: bool.default(false),
 });

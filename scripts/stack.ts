@@ -1,5 +1,6 @@
 import fs from "node:fs";
 import path from "node:path";
+import { DEMO_LAB } from "../seeds/demo";
 import { startMailFake } from "./services/mail";
 import { dataDirUsable, startPostgres } from "./services/postgres";
 import { startS3 } from "./services/s3";
@@ -56,6 +57,8 @@ export async function startStack(p: Profile, log: (s: string) => void): Promise<
         APP_URL: appUrl,
         NEXTAUTH_URL: appUrl,
         WICKMARK_LOCAL: "1",
+        // The local stack carries the invented demo lab; its report headers say so.
+        LAB_NAME: process.env.LAB_NAME ?? DEMO_LAB,
         S3_ENDPOINT: s3.endpoint,
         S3_BUCKET: p.bucket,
         S3_ACCESS_KEY_ID: s3.accessKeyId,

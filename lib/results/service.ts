@@ -40,7 +40,8 @@ async function ballsOf(q: Db, s: SubmissionRow, edition: EditionRow): Promise<Ba
   });
 }
 
-async function resultsOf(q: Db, s: SubmissionRow) {
+/** The shared loader: the edition and the computed results of one submission (results, report, exports). */
+export async function loadSubmissionResults(q: Db, s: SubmissionRow) {
   const edition = (await findEdition(q, s.editionId))!;
   const limits = limitsOf(edition);
   return { edition, ...submissionResults(limits, await ballsOf(q, s, edition), s.currentRound) };
@@ -51,11 +52,11 @@ export async function getSubmissionResults(actor: Actor, id: string): Promise<Re
   const s = await visibleSubmission(actor, id);
   if (!isStaff(actor)) throw new AppError("forbidden", "The lab shows results to the manufacturer once a lead has released them.");
   const q = db();
-  const own = await resultsOf(q, s);
+  const own = await loadSubmissionResults(q, s);
   let surveillance = null;
   if (s.kind === "surveillance" && s.approvalSubmissionId) {
     const a = (await findSubmission(q, s.approvalSubmissionId))!;
-    const approval = await resultsOf(q, a);
+    const approval = await loadSubmissionResults(q, a);
     surveillance = compareWithApproval(own.limits, own.balls, { submissionId: a.id, reference: a.reference, decision: approval.decision.decision, balls: approval.balls });
   }
   return toResultsView(s, own.edition, own, surveillance);

@@ -146,6 +146,10 @@ const MATRIX: Record<string, Entry> = {
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
   "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },
+  // The report and exports follow the results: the manufacturer is refused until release.
+  "GET /api/submissions/[id]/report.pdf": { path: async () => `/api/submissions/${await submission()}/report.pdf`, expect: staffOnly(200) },
+  "GET /api/submissions/[id]/drops.csv": { path: async () => `/api/submissions/${await submission()}/drops.csv`, expect: staffOnly(200) },
+  "GET /api/submissions/[id]/balls.csv": { path: async () => `/api/submissions/${await submission()}/balls.csv`, expect: staffOnly(200) },
 };
 
 const clients = new Map<Who, Client>();

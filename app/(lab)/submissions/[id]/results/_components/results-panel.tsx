@@ -6,6 +6,7 @@ import { Caution } from "@/components/shell/caution";
 import { Notice } from "@/components/ui/notice";
 import { BallTable } from "./ball-table";
 import { DecisionPanel } from "./decision-panel";
+import { Downloads } from "./downloads";
 import { DropDotPlot } from "./drop-dot-plot";
 import { EditionValues } from "./edition-values";
 import { MeansDistribution } from "./means-distribution";
@@ -26,6 +27,7 @@ export function ResultsPanel({ id }: { id: string }) {
         <h1 className="text-3xl font-bold">{r.submission.modelName}</h1>
         <p className="text-ink-600">{r.submission.organisationName}</p>
       </header>
+      <Downloads id={r.submission.id} />
       <Notice tone="warn"><Caution /></Notice>
       <DecisionPanel decision={r.decision} edition={r.edition} />
       {r.surveillance && <SurveillancePanel comparison={r.surveillance} />}

@@ -1,0 +1,74 @@
+import type { Db } from "../db";
+
+// What the report adds to the results: each settled drop's marks and clip, and the clips' identity.
+
+export interface ReportReading {
+  slot: number;
+  reader: string;
+  dispenseFrame: number;
+  clearFrame: number;
+  timeS: number;
+}
+
+export interface ReportDropRow {
+  id: string;
+  runId: string;
+  ordinal: number;
+  state: string;
+  clipId: string | null;
+  /** The current submitted reading of each slot; empty unless the drop is settled. */
+  readings: ReportReading[];
+}
+
+export interface ReportClipRow {
+  id: string;
+  runId: string;
+  originalName: string;
+  sha256: string | null;
+  frameCount: number | null;
+  rate: string | null;
+  averageRate: number | null;
+}
+
+/** Marks of settled drops only, so nothing of a drop still being read blind leaves this query. */
+export async function listReportDrops(q: Db, submissionId: string, settled: readonly string[]): Promise<ReportDropRow[]> {
+  const rows = await q.raw(
+    `select d.id, d.run_id, d.ordinal, d.state, d.clip_id,
+            coalesce(cur.readings, '[]'::json) as readings
+       from drops d
+       join runs r on r.id = d.run_id
+       join samples x on x.id = r.sample_id
+       left join lateral (
+         select json_agg(json_build_object('slot', g.slot, 'reader', u.name, 'dispenseFrame', g.dispense_frame,
+                         'clearFrame', g.clear_frame, 'timeS', g.time_s) order by g.slot) as readings
+           from readings g join users u on u.id = g.reviewer_id
+          where g.drop_id = d.id and g.status = 'submitted'
+            and not exists (select 1 from readings c where c.supersedes_id = g.id and c.status = 'submitted')
+       ) cur on d.state = any(?)
+      where x.submission_id = ?
+      order by d.run_id, d.ordinal`,
+    [[...settled], submissionId],
+  );
+  return rows.rows.map((r: Record<string, any>) => ({ id: r.id, runId: r.run_id, ordinal: r.ordinal, state: r.state, clipId: r.clip_id, readings: r.readings }));
+}
+
+/** The ready clips of the submission's runs, with their hash and frame index summary. */
+export async function listReportClips(q: Db, submissionId: string): Promise<ReportClipRow[]> {
+  const rows = await q("clips as c")
+    .join("runs as r", "r.id", "c.run_id")
+    .join("samples as x", "x.id", "r.sample_id")
+    .leftJoin("frame_indexes as f", "f.clip_id", "c.id")
+    .where("x.submission_id", submissionId)
+    .where("c.status", "ready")
+    .orderBy([{ column: "x.round" }, { column: "x.serial" }, { column: "c.created_at" }])
+    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "f.frame_count", "f.nominal_rate", "f.average_rate");
+  return rows.map((r) => ({
+    id: r.id,
+    runId: r.run_id,
+    originalName: r.original_name,
+    sha256: r.sha256,
+    frameCount: r.frame_count,
+    rate: r.nominal_rate,
+    averageRate: r.average_rate,
+  }));
+}

@@ -1,0 +1,140 @@
+import { execFileSync } from "node:child_process";
+import { mkdirSync, mkdtempSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import Papa from "papaparse";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { closeDb, db } from "@/lib/db";
+import { stopBoss } from "@/lib/jobs";
+import { listOrganisations } from "@/lib/organisations/queries";
+import type { ClipView } from "@/lib/clips/view";
+import { BALL_COLUMNS, DROP_COLUMNS } from "@/lib/reports/csv";
+import { CAUTION } from "@/lib/reports/format";
+import type { ResultsView } from "@/lib/results/view";
+import { DEMO_READ_SUBMISSION } from "@/seeds/demo-results-plan";
+import { seedDemoReadings } from "@/seeds/demo-results";
+import { signedIn, type Client } from "../helpers/app";
+import { demo, makeUser } from "../helpers/fixtures";
+import { newEdition, newRun, newSample, newSubmission } from "../helpers/intake";
+import { plainMp4 } from "../helpers/media";
+import { json, placeOnRun, read } from "../helpers/readings";
+
+// The test report and the exports of a submission read through the API. The clip runs at exactly
+// 25 fps, so a reading from frame 5 to frame 5 + k takes k/25 s. The edition is the test's own,
+// with limits to suit 4 s clips (example values). The PDF's text is read back with pdftotext
+// (poppler-utils), a real extractor, not our own code.
+let lead: Client;
+let submission: { id: string; reference: string };
+let organisationId: string;
+let editionName: string;
+const hashes: string[] = [];
+const tmp = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wickmark-report-"));
+const SCREENSHOTS = path.resolve(import.meta.dirname, "../../test-results/screenshots");
+const oneLine = (s: string) => s.replace(/\s+/g, " ").trim();
+
+async function pdfText(res: Response, name: string): Promise<string> {
+  const file = path.join(tmp, `${name}.pdf`);
+  writeFileSync(file, Buffer.from(await res.arrayBuffer()));
+  return execFileSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" });
+}
+
+beforeAll(async () => {
+  lead = await signedIn(demo.email("lead"), demo.password);
+  const [ua, ub] = [await makeUser(["reviewer"]), await makeUser(["reviewer"])];
+  const [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
+  // The only edition in force on 2003-05-02: one round of two balls, 2.0 s minimum, 0.3 s guard band.
+  editionName = (await newEdition(lead, { effectiveFrom: "2003-05-01", minAbsorptionS: 2.0, guardBandS: 0.3, roundSizes: [2], readingToleranceS: 0.5 })).name;
+  organisationId = (await listOrganisations(db()))[0].id;
+  submission = await newSubmission(lead, organisationId, { receivedOn: "2003-05-02" });
+  for (const [serial, clears] of [["RP-1", [75, 76, 77]], ["RP-2", [70, 71, 72]]] as const) {
+    const sample = await newSample(lead, submission.id, { serial, round: 1 });
+    const placed = await placeOnRun(lead, (await newRun(lead, sample.id)).id, { file: plainMp4(undefined, 4) });
+    hashes.push((await json<{ clip: ClipView }>(await lead.get(`/api/clips/${placed.clipId}`), 200)).clip.sha256!);
+    for (const [i, clear] of clears.entries()) {
+      await read(a, placed.dropIds[i], 5, clear);
+      await read(b, placed.dropIds[i], 5, clear);
+    }
+  }
+}, 300_000);
+afterAll(async () => {
+  await stopBoss();
+  await closeDb();
+});
+
+describe("the test report and exports", () => {
+  it("the PDF carries the decision, its explanation, the clips' SHA-256, the edition and the caution", async () => {
+    const results = await json<ResultsView>(await lead.get(`/api/submissions/${submission.id}/results`), 200);
+    expect(results.decision.decision).toBe("meets limit");
+    const res = await lead.get(`/api/submissions/${submission.id}/report.pdf`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="test-report-${submission.reference}.pdf"`);
+    const text = await pdfText(res, "report");
+    const flat = oneLine(text);
+    expect(flat).toContain("Round 1: meets limit");
+    expect(flat).toContain(oneLine(results.decision.explanation));
+    for (const h of hashes) expect(text).toContain(h);
+    expect(flat).toContain(editionName);
+    expect(flat).toContain(oneLine(CAUTION));
+    expect(flat).toContain("Not signed off: draft report");
+    expect(flat).toContain("No rulings");
+    // The ball mean to 0.1 s: (70 + 71 + 72)/3/25 = 2.84 s → 2.8; a drop to 0.001 s: 70/25 = 2.800 s.
+    expect(flat).toMatch(/RP-1 1 3 2\.8 /);
+    expect(flat).toContain("2.800");
+    expect(flat).toMatch(/Page 1 of \d+/);
+    mkdirSync(SCREENSHOTS, { recursive: true });
+    execFileSync("pdftoppm", ["-png", "-r", "80", "-f", "1", "-l", "1", "-singlefile", path.join(tmp, "report.pdf"), path.join(SCREENSHOTS, "report-page-1")]);
+  }, 60_000);
+
+  it("drops.csv has one row per drop with the documented columns", async () => {
+    const res = await lead.get(`/api/submissions/${submission.id}/drops.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toMatch(/^text\/csv/);
+    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="drops-${submission.reference}.csv"`);
+    const parsed = Papa.parse<Record<string, string>>(await res.text(), { header: true, skipEmptyLines: true });
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.meta.fields).toEqual([...DROP_COLUMNS]);
+    expect(parsed.data).toHaveLength(6);
+    const first = parsed.data[0];
+    expect(first).toMatchObject({ submission: submission.reference, sample_serial: "RP-1", round: "1", drop: "1", state: "agreed", first_dispense_frame: "5", first_clear_frame: "75", second_clear_frame: "75", clip_sha256: hashes[0] });
+    expect(Number(first.agreed_time_s)).toBeCloseTo(70 / 25, 9);
+    expect(first.tested_at).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
+  });
+
+  it("balls.csv has one row per ball with its statistics", async () => {
+    const res = await lead.get(`/api/submissions/${submission.id}/balls.csv`);
+    const parsed = Papa.parse<Record<string, string>>(await res.text(), { header: true, skipEmptyLines: true });
+    expect(parsed.meta.fields).toEqual([...BALL_COLUMNS]);
+    expect(parsed.data.map((r) => r.sample_serial)).toEqual(["RP-1", "RP-2"]);
+    const [one] = parsed.data;
+    expect(one).toMatchObject({ n: "3", status: "meets", outlier_drop: "" });
+    expect(Number(one.mean_s)).toBeCloseTo(71 / 25, 9);
+    expect(Number(one.sd_s)).toBeCloseTo(1 / 25, 9);
+    expect(Number(one.range_s)).toBeCloseTo(2 / 25, 9);
+  });
+
+  it("is refused to the manufacturer until the results are released", async () => {
+    const own = await makeUser(["manufacturer"], { organisationId });
+    const m = await signedIn(own.email, own.password);
+    for (const file of ["report.pdf", "drops.csv", "balls.csv"]) {
+      const res = await m.get(`/api/submissions/${submission.id}/${file}`);
+      expect(res.status).toBe(403);
+      expect((await res.json()).error.message).toBe("The lab shows the report to the manufacturer once a lead has released the results.");
+    }
+  });
+
+  it("renders the demo's read submission", async () => {
+    const r = await seedDemoReadings(db(), tmp, () => {}, { width: 160, height: 90, fps: "10", noise: 2, clipTimeoutS: 600 });
+    expect(r.problems).toEqual([]);
+    const id = (await db()("submissions").where({ reference: DEMO_READ_SUBMISSION }).first("id")).id;
+    const t0 = performance.now();
+    const res = await lead.get(`/api/submissions/${id}/report.pdf`);
+    const bytes = Buffer.from(await res.arrayBuffer());
+    // A figure for the record, not a target: speed belongs in benchmarks.
+    console.log(`report of ${DEMO_READ_SUBMISSION}: ${bytes.length} bytes in ${(performance.now() - t0).toFixed(0)} ms`);
+    expect(res.status).toBe(200);
+    writeFileSync(path.join(tmp, "demo.pdf"), bytes);
+    execFileSync("pdftoppm", ["-png", "-r", "80", path.join(tmp, "demo.pdf"), path.join(SCREENSHOTS, "report-demo")]);
+    expect(oneLine(execFileSync("pdftotext", [path.join(tmp, "demo.pdf"), "-"], { encoding: "utf8" }))).toContain(DEMO_READ_SUBMISSION);
+  }, 900_000);
+});
