@@ -28,6 +28,9 @@ export const envSchema = z.object({
   CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts"),
   CLIP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(2 * 3600),
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(60),
+  // Outbox: how often the worker looks for mail due to be sent, and how long a claimed row is held.
+  OUTBOX_SWEEP_SECONDS: z.coerce.number().int().min(1).default(30),
+  OUTBOX_LEASE_SECONDS: z.coerce.number().int().min(5).default(300),
   // The benchmark's baseline route (one insert) answers only when this is on.
   BENCH_ROUTES: bool.default(false),
 });

@@ -40,7 +40,8 @@ async function ballsOf(q: Db, s: SubmissionRow, edition: EditionRow): Promise<Ba
   });
 }
 
-async function resultsOf(q: Db, s: SubmissionRow) {
+/** The results of a submission from its settled drops, in `q` (a transaction sees its own changes). */
+export async function resultsOf(q: Db, s: SubmissionRow) {
   const edition = (await findEdition(q, s.editionId))!;
   const limits = limitsOf(edition);
   return { edition, ...submissionResults(limits, await ballsOf(q, s, edition), s.currentRound) };
