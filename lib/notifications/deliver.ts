@@ -27,7 +27,7 @@ export async function attemptDelivery(q: Db, id: string, smtpUrl?: string): Prom
   try {
     await sendClaimed(row, smtpUrl);
   } catch (err) {
-    await markFailed(q, id, err instanceof Error ? err.message : String(err), retryDelaySeconds(row.attempts));
+    await markFailed(q, id, err instanceof Error ? err.message : String(err), retryDelaySeconds(row.attempts, env().OUTBOX_RETRY_BASE_SECONDS));
     throw err;
   }
   await markSent(q, id);

@@ -17,9 +17,9 @@ export function wantsMail(kind: MailKind, optOut: readonly string[]): boolean {
   return KINDS[kind].essential || !optOut.includes(kind);
 }
 
-/** Wait before the next attempt after `attempts` failed ones: 30 s, 1 min, 2 min … capped at 30 min. */
-export function retryDelaySeconds(attempts: number): number {
-  return Math.min(30 * 2 ** Math.max(0, attempts - 1), 1800);
+/** Wait before the next attempt after `attempts` failed ones: base, 2×, 4× … capped at 30 min. */
+export function retryDelaySeconds(attempts: number, baseSeconds = 30): number {
+  return Math.min(baseSeconds * 2 ** Math.max(0, attempts - 1), 1800);
 }
 
 /** After this many failed attempts a row stays `failed` and is shown to the leads; nobody retries it. */
