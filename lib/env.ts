@@ -30,6 +30,10 @@ export const envSchema = z.object({
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(60),
   // The lab named in the header of every test report.
   LAB_NAME: z.string().min(1).max(120).default("Ball testing laboratory"),
+  // Outbox: how often the worker looks for mail due to be sent, and how long a claimed row is held.
+  OUTBOX_SWEEP_SECONDS: z.coerce.number().int().min(1).default(30),
+  OUTBOX_LEASE_SECONDS: z.coerce.number().int().min(5).default(300),
+  OUTBOX_RETRY_BASE_SECONDS: z.coerce.number().int().min(1).default(30),
   // The benchmark's baseline route (one insert) answers only when this is on.
   BENCH_ROUTES: bool.default(false),
 });

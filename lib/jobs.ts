@@ -14,6 +14,7 @@ export const QUEUES = {
   clipIndex: clipStep("clip-index"),
   clipProxy: clipStep("clip-proxy"),
   clipThumbnails: clipStep("clip-thumbnails"),
+  outboxSend: { name: "outbox-send", retryLimit: 5, retryDelay: 10, retryBackoff: true },
 } as const;
 
 export type QueueKey = keyof typeof QUEUES;

@@ -1,6 +1,7 @@
 import { QUEUE_OF, runClipStep } from "../lib/clips/pipeline";
 import { STEPS } from "../lib/clips/rules";
 import { QUEUES } from "../lib/jobs";
+import { deliverOutboxRow } from "../lib/notifications/deliver";
 
 export interface JobInfo {
   data: Record<string, unknown>;
@@ -13,11 +14,12 @@ type QueueName = (typeof QUEUES)[keyof typeof QUEUES]["name"];
 
 const clipHandlers = Object.fromEntries(
   STEPS.map((step) => [QUEUES[QUEUE_OF[step]].name, (job: JobInfo) => runClipStep(step, String(job.data.clipId), job)]),
-) as Record<Exclude<QueueName, "ping">, Handler>;
+) as Record<Exclude<QueueName, "ping" | "outbox-send">, Handler>;
 
 /** One handler per queue in lib/jobs.ts; the type makes a missing one a compile error. */
 export const handlers: Record<QueueName, Handler> = {
   // Completes at once: the job's "completed" state is the proof that a worker is consuming.
   async ping() {},
   ...clipHandlers,
+  "outbox-send": (job) => deliverOutboxRow(String(job.data.outboxId)),
 };

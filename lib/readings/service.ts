@@ -1,6 +1,7 @@
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
 import { findFrameIndex } from "../clips/index-queries";
+import { notifyBelowLimit, notifyDiscrepancy } from "../notifications/events";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
 import { assertUnlocked } from "../signoff/lock";
@@ -127,6 +128,9 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
     if (o.state === drop.state) return toDropView(actor, drop, after);
     await updateDropOutcome(trx, drop.id, outcome);
     await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
+    // Mail in the same transaction: leads for a new discrepancy, the manufacturer for a ball newly below the limit.
+    if (o.state === "discrepancy") await notifyDiscrepancy(trx, drop, outcome.timeDifferenceS);
+    if (o.state === "agreed") await notifyBelowLimit(trx, drop.submissionId);
     return toDropView(actor, { ...drop, ...outcome }, after);
   });
 }

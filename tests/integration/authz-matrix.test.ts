@@ -34,6 +34,11 @@ const invitedUser = async () => (await makeUser(["technician"], { invited: true 
 const submission = async () => (await newSubmission(lead, org)).id;
 const sample = async () => (await newSample(lead, await submission())).id;
 const run = async (over = {}) => (await newRun(lead, await sample(), over)).id;
+const sampleRequestBody = () => ({ count: 24, weight: "15 lb", dueBy: "2099-01-31", note: "" });
+const sampleRequest = async () => {
+  const res = await lead.post(`/api/submissions/${await submission()}/sample-requests`, sampleRequestBody());
+  return ((await res.json()) as { request: { id: string } }).request.id;
+};
 const flaggedRun = () => run({ surfaceTemp: { value: 30, unit: "C" } });
 // Clips are lab evidence: a manufacturer is told they do not exist.
 const clipReaders = (s: number): Record<Who, number> => ({ ...staffOnly(s), manufacturer: 404 });
@@ -123,6 +128,13 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },
+  "GET /api/mail": { path: "/api/mail", expect: leadOnly(200) },
+  "GET /api/account/notifications": { path: "/api/account/notifications", expect: signedInOnly(200) },
+  "PUT /api/account/notifications": { path: "/api/account/notifications", body: () => ({ optOut: [] }), expect: signedInOnly(200) },
+  "GET /api/submissions/[id]/sample-requests": { path: async () => `/api/submissions/${await submission()}/sample-requests`, expect: signedInOnly(200) },
+  "POST /api/submissions/[id]/sample-requests": { path: async () => `/api/submissions/${await submission()}/sample-requests`, body: sampleRequestBody, expect: intakeEditors(201) },
+  // Only the manufacturer that owns the submission acknowledges its requests.
+  "POST /api/sample-requests/[id]/acknowledge": { path: async () => `/api/sample-requests/${await sampleRequest()}/acknowledge`, body: () => ({ shippingDetails: "Courier, two boxes" }), expect: { anon: 401, technician: 403, reviewer: 403, lead: 403, manufacturer: 200 } },
   "POST /api/dev/bench-insert": { path: "/api/dev/bench-insert", body: () => ({}), expect: signedInOnly(404) },
   "GET /api/runs/[id]/drops": { path: async () => `/api/runs/${clipRun}/drops`, expect: clipReaders(200) },
   "GET /api/drops/[id]": { path: async () => `/api/drops/${drops[0]}`, expect: clipReaders(200) },

@@ -5,6 +5,7 @@ import { useSubmission } from "@/app/_client/submissions";
 import { AddSampleForm } from "./add-sample-form";
 import { ImportSamplesForm } from "./import-samples-form";
 import { RoundSamples } from "./round-samples";
+import { SampleRequestsPanel } from "./sample-requests-panel";
 import { SubmissionSummary } from "./submission-summary";
 
 export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean }) {
@@ -33,6 +34,7 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
           <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canEdit} />
         ))}
       </section>
+      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canEdit} />
       {canEdit && (
         <div className="grid gap-6 lg:grid-cols-2">
           <AddSampleForm submissionId={submission.id} currentRound={submission.currentRound} />

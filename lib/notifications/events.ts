@@ -1,0 +1,42 @@
+import type { Db } from "../db";
+import { env } from "../env";
+import type { DropRow } from "../readings/drop-queries";
+import { loadSubmissionResults } from "../results/service";
+import { findSubmission } from "../submissions/queries";
+import { queueMail } from "./outbox";
+import { insertBelowLimitReports, listReportedBelow } from "./report-queries";
+import { organisationRecipients, recipientsWithRole } from "./queries";
+import { belowLimitMail, discrepancyMail, resultsReleasedMail } from "./templates";
+
+// Events that write mail: each takes the event's transaction, so the mail exists exactly when the
+// event does, and is delivered later by the worker.
+
+/** Leads: a drop's two readings disagree. Once per drop. */
+export async function notifyDiscrepancy(trx: Db, drop: DropRow, differenceS: number | null): Promise<string[]> {
+  const mail = discrepancyMail({ appUrl: env().APP_URL, dropId: drop.id, reference: drop.submissionReference, sampleSerial: drop.sampleSerial, ordinal: drop.ordinal, differenceS });
+  return queueMail(trx, await recipientsWithRole(trx, "lead"), mail, `discrepancy:${drop.id}`);
+}
+
+/**
+ * Manufacturer contacts: a ball's result fell below the limit during testing. Called when a drop
+ * settles; each ball is reported once (below_limit_reports keeps the record).
+ */
+export async function notifyBelowLimit(trx: Db, submissionId: string): Promise<string[]> {
+  const s = await findSubmission(trx, submissionId);
+  if (!s) return [];
+  const results = await loadSubmissionResults(trx, s);
+  const reported = new Set(await listReportedBelow(trx, s.id));
+  const fresh = results.balls.filter((b) => results.decision.belowBalls.includes(b.serial) && !reported.has(b.sampleId));
+  if (!fresh.length) return [];
+  await insertBelowLimitReports(trx, s.id, fresh.map((b) => b.sampleId));
+  const mail = belowLimitMail({ appUrl: env().APP_URL, submissionId: s.id, reference: s.reference, modelName: s.modelName, limitS: results.limits.minAbsorptionS, balls: fresh.map((b) => ({ serial: b.serial, meanS: b.value ?? b.mean ?? 0 })) });
+  return queueMail(trx, await organisationRecipients(trx, s.organisationId), mail);
+}
+
+/** Manufacturer contacts: a lead released the results (called by the sign-off, in its transaction). */
+export async function notifyResultsReleased(trx: Db, submissionId: string, revision: number): Promise<string[]> {
+  const s = await findSubmission(trx, submissionId);
+  if (!s) return [];
+  const mail = resultsReleasedMail({ appUrl: env().APP_URL, submissionId: s.id, reference: s.reference, modelName: s.modelName, revision });
+  return queueMail(trx, await organisationRecipients(trx, s.organisationId), mail, `released:${s.id}:${revision}`);
+}

@@ -1,0 +1,58 @@
+import type { MailKind } from "./rules";
+
+// The words of every notification: pure, so wording and links are tested without SMTP.
+
+export interface MailContent {
+  kind: MailKind;
+  subject: string;
+  text: string;
+  html: string;
+}
+
+const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+const FOOT = "The governing specification and your laboratory's own accredited procedure decide; Wickmark's limits and defaults are examples.";
+const PREFS = (appUrl: string) => `You can switch off the optional notices at ${appUrl}/account.`;
+
+function build(kind: MailKind, subject: string, paras: string[], link: { href: string; label: string } | null, appUrl: string): MailContent {
+  const textParts = [...paras, ...(link ? [`${link.label}: ${link.href}`] : []), "", FOOT, PREFS(appUrl)];
+  const html = [
+    ...paras.map((p) => `<p>${esc(p)}</p>`),
+    ...(link ? [`<p><a href="${esc(link.href)}">${esc(link.label)}</a></p>`] : []),
+    `<p style="color:#555;font-size:90%">${esc(FOOT)} ${esc(PREFS(appUrl))}</p>`,
+  ].join("");
+  return { kind, subject, text: textParts.join("\n\n"), html };
+}
+
+export function discrepancyMail(o: { appUrl: string; dropId: string; reference: string; sampleSerial: string; ordinal: number; differenceS: number | null }): MailContent {
+  const diff = o.differenceS === null ? "" : ` The two drop times differ by ${o.differenceS.toFixed(2)} s.`;
+  return build("discrepancy.new", `Discrepancy to settle: ${o.reference}, ball ${o.sampleSerial}, drop ${o.ordinal}`,
+    [`Two readings of drop ${o.ordinal} on ball ${o.sampleSerial} (submission ${o.reference}) do not agree within the edition's tolerance.${diff}`, "A lead settles it with a ruling and a reason."],
+    { href: `${o.appUrl}/drops/${o.dropId}`, label: "Open the drop" }, o.appUrl);
+}
+
+export function belowLimitMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; balls: { serial: string; meanS: number }[]; limitS: number }): MailContent {
+  const list = o.balls.map((b) => `ball ${b.serial}: mean ${b.meanS.toFixed(1)} s`).join("; ");
+  return build("ball.below_limit", `${o.reference} ${o.modelName}: a ball is below the limit during testing`,
+    [`During testing of ${o.modelName} (submission ${o.reference}), the mean absorption time of ${o.balls.length === 1 ? "one ball is" : `${o.balls.length} balls are`} below the minimum of ${o.limitS.toFixed(1)} s: ${list}.`, "Testing continues; this is not the decision. The lab releases the results once a lead has signed them off."],
+    { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "Open the submission in the portal" }, o.appUrl);
+}
+
+export function samplesRequestedMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; round: number; count: number; weight: string; dueBy: string; note: string }): MailContent {
+  return build("samples.requested", `${o.reference}: please send ${o.count} more samples for round ${o.round}`,
+    [`The lab needs ${o.count} more sample balls of ${o.modelName} (submission ${o.reference}) for round ${o.round} of testing.`, `Weight: ${o.weight}. Please have them at the lab by ${o.dueBy}.`, ...(o.note ? [`Note from the lab: ${o.note}`] : []), "Please acknowledge the request in the portal and tell the lab how and when you ship them."],
+    { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "Acknowledge in the portal" }, o.appUrl);
+}
+
+export function resultsReleasedMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; revision: number }): MailContent {
+  const rev = o.revision > 1 ? ` (revision ${o.revision})` : "";
+  return build("results.released", `${o.reference} ${o.modelName}: results released${rev}`,
+    [`A lead has reviewed and released the results of ${o.modelName} (submission ${o.reference})${rev}.`, `The test report: ${o.appUrl}/api/submissions/${o.submissionId}/report.pdf`],
+    { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "See the results in the portal" }, o.appUrl);
+}
+
+export function reviewerDigestMail(o: { appUrl: string; name: string; waiting: number; oldest: string | null }): MailContent {
+  const oldest = o.oldest ? ` The oldest has waited since ${o.oldest}.` : "";
+  return build("reviewer.digest", `${o.waiting} drop${o.waiting === 1 ? "" : "s"} waiting for you to read`,
+    [`Hello ${o.name},`, `${o.waiting} drop${o.waiting === 1 ? " is" : "s are"} waiting for your reading.${oldest}`],
+    { href: `${o.appUrl}/queue`, label: "Open your reading queue" }, o.appUrl);
+}
