@@ -8,6 +8,7 @@ import type { ResultsView } from "../results/view";
 import { assertLead } from "../submissions/policy";
 import { findSubmission, lockSubmission, updateSubmissionRow } from "../submissions/queries";
 import { findUserById } from "../users/queries";
+import { notifyResultsReleased } from "../notifications/events";
 import { countUnsettledDrops, insertReopening, insertSignature, listReopenings, listSignatures, restoreDropStates, setDropStates } from "./queries";
 import { currentRevision, diffResults, lockReason, type ResultChanges, type Snapshot } from "./rules";
 import type { ReopenInput, SignInput } from "./schema";
@@ -68,6 +69,7 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
     await updateSubmissionRow(trx, submissionId, { status: "released" });
     await setDropStates(trx, submissionId, ["agreed", "ruled"], "signed off");
     await recordChange(trx, actor, { action: "submission.signed_off", entity: "submission", entityId: submissionId, before: { status: s.status }, after: { status: "released", revision, signatureId: id, meaning: "results reviewed and released", changes } });
+    await notifyResultsReleased(trx, submissionId, revision);
   });
   return getSignOff(actor, submissionId);
 }
