@@ -21,7 +21,7 @@ export interface SignOffView {
   revision: number;
   locked: boolean;
   signatures: { revision: number; signedBy: string; signedAt: string; meaning: string; changes: ResultChanges | null }[];
-  reopenings: { revision: number; reason: string; reopenedAt: string }[];
+  reopenings: { revision: number; reason: string; reopenedBy: string; reopenedAt: string }[];
 }
 
 async function lockState(q: ReturnType<typeof db>, submissionId: string, reference: string) {
@@ -40,7 +40,7 @@ export async function getSignOff(actor: Actor, submissionId: string): Promise<Si
     revision,
     locked,
     signatures: signed.map((g) => ({ revision: g.revision, signedBy: g.signedByName, signedAt: g.signedAt.toISOString(), meaning: g.meaning, changes: (g.changes as ResultChanges | null) ?? null })),
-    reopenings: reopened.map((r) => ({ revision: r.revision, reason: r.reason, reopenedAt: r.reopenedAt.toISOString() })),
+    reopenings: reopened.map((r) => ({ revision: r.revision, reason: r.reason, reopenedBy: r.reopenedByName, reopenedAt: r.reopenedAt.toISOString() })),
   };
 }
 

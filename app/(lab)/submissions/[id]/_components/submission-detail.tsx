@@ -13,12 +13,12 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
   if (q.isPending) return <p className="text-ink-600" role="status">Loading the submission…</p>;
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   if (q.data.view !== "staff") return <Notice tone="error">This page is for laboratory staff.</Notice>;
-  const { submission, edition, rounds, flaggedRuns } = q.data;
+  const { submission, edition, rounds, flaggedRuns, signOff } = q.data;
   const sampleCount = rounds.reduce((n, r) => n + r.samples.length, 0);
 
   return (
     <div className="space-y-8">
-      <SubmissionSummary submission={submission} edition={edition} />
+      <SubmissionSummary submission={submission} edition={edition} signOff={signOff} />
       {flaggedRuns > 0 && (
         <Notice tone="warn">
           <strong>
