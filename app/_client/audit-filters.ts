@@ -1,18 +1,11 @@
 // The audit page's filters and their query string: plain code, shared by the page (server) and the list (browser).
 
-/** The audit page's filters as the address carries them; blanks are left out. */
-export interface AuditFilters {
-  actorId?: string;
-  action?: string;
-  entity?: string;
-  entityId?: string;
-  from?: string;
-  to?: string;
-  page?: string;
-  pageSize?: string;
-}
+import type { AuditQuery } from "@/lib/audit/schema";
 
-export const FILTER_KEYS = ["actorId", "action", "entity", "entityId", "from", "to", "page", "pageSize"] as const;
+/** The audit API's filters as the address carries them: text, blanks left out. */
+export type AuditFilters = { [K in keyof AuditQuery]?: string };
+
+export const FILTER_KEYS = ["actorId", "action", "entity", "entityId", "from", "to", "page", "pageSize"] as const satisfies readonly (keyof AuditQuery)[];
 
 export function auditSearch(f: AuditFilters): string {
   const out = new URLSearchParams();

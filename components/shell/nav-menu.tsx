@@ -40,7 +40,7 @@ export function NavMenu({ label, items, path }: { label: string; items: NavItem[
         className={`${linkClass(current)} flex items-center gap-1`}
       >
         {label}
-        <svg viewBox="0 0 10 6" className={`h-2 w-2.5 transition-transform ${open ? "rotate-180" : ""}`} aria-hidden="true">
+        <svg viewBox="0 0 10 6" className={`h-2 w-2.5 ${open ? "rotate-180" : ""}`} aria-hidden="true">
           <path d="M1 1l4 4 4-4" stroke="currentColor" strokeWidth="1.6" fill="none" />
         </svg>
       </button>

@@ -22,9 +22,15 @@ export function AuditFiltersForm({ filters, errors, busy, onApply }: { filters: 
     setDraft(draftOf(filters));
   }
   const set = (k: keyof Draft) => (e: { target: { value: string } }) => setDraft({ ...draft, [k]: e.target.value });
+  // What the form asks for is what it shows from now on, so the address catching up resets nothing typed since.
+  const apply = (d: Draft) => {
+    setDraft(d);
+    setShown(auditSearch({ ...d, pageSize: filters.pageSize }));
+    onApply(d);
+  };
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    onApply(draft);
+    apply(draft);
   };
   return (
     <form onSubmit={submit} aria-label="Filters" className="grid gap-4 rounded-lg border border-ink-100 bg-white p-4 shadow-sm sm:grid-cols-2 lg:grid-cols-6">
@@ -51,7 +57,7 @@ export function AuditFiltersForm({ filters, errors, busy, onApply }: { filters: 
       </div>
       <div className="flex items-end gap-3 lg:col-span-2">
         <Button type="submit" disabled={busy}>{busy ? "Searching…" : "Show events"}</Button>
-        <Button type="button" kind="secondary" onClick={() => onApply(BLANK)}>Clear filters</Button>
+        <Button type="button" kind="secondary" onClick={() => apply(BLANK)}>Clear filters</Button>
       </div>
     </form>
   );

@@ -25,10 +25,9 @@ export function SignForm({ submissionId, revision }: { submissionId: string; rev
         with a reason. It records your name and the time.
       </p>
       <div className="max-w-sm">
-        <Field id="signoff-password" type="password" autoComplete="current-password" label="Your password, to sign" value={password} onChange={(e) => setPassword(e.target.value)} error={err?.fields.password} />
+        <Field id="signoff-password" type="password" autoComplete="current-password" label="Your password, to sign" value={password} onChange={(e) => setPassword(e.target.value)} error={err?.fields.password ? err.message : undefined} />
       </div>
       {err && !err.fields.password && <Notice tone="error">{err.message}</Notice>}
-      {err?.fields.password && <p className="text-sm text-bad-700">{err.message}</p>}
       <Button type="submit" disabled={sign.isPending}>{sign.isPending ? "Signing…" : "Sign off results"}</Button>
     </form>
   );

@@ -2,20 +2,7 @@
 
 import type { SignatureView, SignOffView } from "@/app/_client/signoff";
 import { LocalTime } from "@/components/ui/local-time";
-
-const seconds = (v: number | null) => (v === null ? "no value" : `${v.toFixed(1)} s`);
-
-/** What changed in the results since the revision signed before this one, in words. */
-export function changeLines(c: SignatureView["changes"]): string[] {
-  if (!c) return [];
-  const lines = [
-    ...(c.decision ? [`Decision: ${c.decision.before} → ${c.decision.after}`] : []),
-    ...(c.ballsAdded.length ? [`Balls added: ${c.ballsAdded.join(", ")}`] : []),
-    ...(c.ballsRemoved.length ? [`Balls removed: ${c.ballsRemoved.join(", ")}`] : []),
-    ...c.balls.map((b) => `Ball ${b.serial}: ${[b.mean && `mean ${seconds(b.mean.before)} → ${seconds(b.mean.after)}`, b.status && `status ${b.status.before} → ${b.status.after}`].filter(Boolean).join(", ")}`),
-  ];
-  return lines.length ? lines : ["No change in the ball results or the decision."];
-}
+import { changeLines } from "./change-lines";
 
 type Entry = { kind: "signed"; revision: number; at: string; s: SignatureView } | { kind: "reopened"; revision: number; at: string; r: SignOffView["reopenings"][number] };
 
@@ -25,7 +12,7 @@ export function SignoffHistory({ view }: { view: SignOffView }) {
     ...view.signatures.map((s) => ({ kind: "signed" as const, revision: s.revision, at: s.signedAt, s })),
     ...view.reopenings.map((r) => ({ kind: "reopened" as const, revision: r.revision, at: r.reopenedAt, r })),
   ].sort((a, b) => a.at.localeCompare(b.at));
-  if (entries.length === 0) return <p className="text-sm text-ink-600">Not signed off yet: no signature has been made on this submission.</p>;
+  if (entries.length === 0) return <p className="text-sm text-ink-600">No signatures or re-openings yet.</p>;
   return (
     <ol className="space-y-3 border-l-2 border-ink-100 pl-4" aria-label="Signatures and re-openings">
       {entries.map((e) =>
