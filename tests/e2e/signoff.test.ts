@@ -66,6 +66,18 @@ describe("the lead's desk", () => {
     expect(await nav.getByRole("link", { name: "Audit" }).count()).toBe(0);
   });
 
+  it("signing off while a drop is in discrepancy is refused in words, and the password stays typed", async () => {
+    await page.goto(`${APP_URL}/submissions/${submissionId}/results`);
+    const panel = page.getByRole("region", { name: "Sign-off" });
+    const password = panel.getByLabel("Your password, to sign");
+    await password.fill(demo.password);
+    await panel.getByRole("button", { name: "Sign off results" }).click();
+    // Ball LD-1 has two settled drops of three: its result, and so the decision, waits for the third.
+    await panel.getByRole("alert").filter({ hasText: /decision is still pending|not settled yet/ }).waitFor();
+    expect(await password.inputValue()).toBe(demo.password);
+    await screenshot(page, "signoff-refused-unsettled");
+  });
+
   it("rules the discrepancy: accepts the second reading with a reason", async () => {
     await page.goto(`${APP_URL}/drops/${disputed}/ruling`);
     const form = page.getByRole("region", { name: "Ruling" });
