@@ -54,7 +54,7 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
   }
   const results = await getSubmissionResults(actor, submissionId);
   if (results.balls.length === 0) throw new AppError("conflict", "This submission has no ball results yet, so there is nothing to sign off.");
-  if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending (${results.decision.explanation}); results can be signed off once it is made.`);
+  if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending. ${results.decision.explanation} Results can be signed off once it is made.`);
   await db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
     const s = (await findSubmission(trx, submissionId))!;
