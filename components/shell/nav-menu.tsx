@@ -12,13 +12,19 @@ export function NavMenu({ label, items, path }: { label: string; items: NavItem[
   const [open, setOpen] = useState(false);
   const [openedAt, setOpenedAt] = useState(path);
   const box = useRef<HTMLLIElement>(null);
+  const button = useRef<HTMLButtonElement>(null);
   const id = useId();
   // Following a link closes the menu.
   if (open && openedAt !== path) setOpen(false);
   useEffect(() => {
     if (!open) return;
     const away = (e: MouseEvent) => !box.current?.contains(e.target as Node) && setOpen(false);
-    const esc = (e: KeyboardEvent) => e.key === "Escape" && setOpen(false);
+    // Escape closes the menu and puts focus back on its button, so a keyboard user is not left nowhere.
+    const esc = (e: KeyboardEvent) => {
+      if (e.key !== "Escape") return;
+      setOpen(false);
+      button.current?.focus();
+    };
     document.addEventListener("mousedown", away);
     document.addEventListener("keydown", esc);
     return () => {
@@ -30,6 +36,7 @@ export function NavMenu({ label, items, path }: { label: string; items: NavItem[
   return (
     <li ref={box} className="relative">
       <button
+        ref={button}
         type="button"
         aria-expanded={open}
         aria-controls={id}
@@ -47,7 +54,7 @@ export function NavMenu({ label, items, path }: { label: string; items: NavItem[
       <ul id={id} hidden={!open} className="absolute left-0 z-20 mt-1 min-w-44 rounded-md border border-ink-600 bg-ink-900 p-1 shadow-lg">
         {items.map((i) => (
           <li key={i.href}>
-            <Link href={i.href} aria-current={isCurrent(path, i.href) ? "page" : undefined} className={linkClass(isCurrent(path, i.href))}>
+            <Link href={i.href} onClick={() => setOpen(false)} aria-current={isCurrent(path, i.href) ? "page" : undefined} className={linkClass(isCurrent(path, i.href))}>
               {i.label}
             </Link>
           </li>

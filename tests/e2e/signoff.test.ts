@@ -62,8 +62,10 @@ describe("the lead's desk", () => {
     await nav.getByRole("button", { name: "Administration" }).click();
     await nav.getByRole("link", { name: "Audit" }).waitFor();
     await screenshot(page, "signoff-nav-menu");
+    await nav.getByRole("link", { name: "Audit" }).focus();
     await page.keyboard.press("Escape");
     expect(await nav.getByRole("link", { name: "Audit" }).count()).toBe(0);
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe("Administration");
   });
 
   it("signing off while a drop is in discrepancy is refused in words, and the password stays typed", async () => {
