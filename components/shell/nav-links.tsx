@@ -2,26 +2,27 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import type { NavItem } from "./nav-items";
+import { splitNav, type NavItem } from "./nav-items";
+import { isCurrent, linkClass, NavMenu } from "./nav-menu";
+
+function NavLink({ item, path }: { item: NavItem; path: string }) {
+  return (
+    <li>
+      <Link href={item.href} aria-current={isCurrent(path, item.href) ? "page" : undefined} className={linkClass(isCurrent(path, item.href))}>
+        {item.label}
+      </Link>
+    </li>
+  );
+}
 
 export function NavLinks({ items }: { items: NavItem[] }) {
   const path = usePathname();
+  const { before, admin, after } = splitNav(items);
   return (
-    <ul className="flex flex-wrap">
-      {items.map((i) => {
-        const current = path === i.href || path.startsWith(`${i.href}/`);
-        return (
-          <li key={i.href}>
-            <Link
-              href={i.href}
-              aria-current={current ? "page" : undefined}
-              className={`block rounded-md px-2 py-2 text-sm font-semibold ${current ? "bg-wick-500 text-ink-900" : "text-ink-100 hover:bg-ink-800"}`}
-            >
-              {i.label}
-            </Link>
-          </li>
-        );
-      })}
+    <ul className="flex flex-wrap items-center">
+      {before.map((i) => <NavLink key={i.href} item={i} path={path} />)}
+      {admin.length > 0 && <NavMenu label="Administration" items={admin} path={path} />}
+      {after.map((i) => <NavLink key={i.href} item={i} path={path} />)}
     </ul>
   );
 }

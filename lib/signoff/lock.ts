@@ -1,7 +1,7 @@
 import type { Db } from "../db";
 import { AppError } from "../errors";
 import { listReopenings, listSignatures } from "./queries";
-import { lockReason } from "./rules";
+import { currentRevision, lockReason } from "./rules";
 
 /**
  * Refuses a change to a submission's records while its revision in force is signed off. Call it
@@ -23,4 +23,11 @@ export async function assertUnlocked(q: Db, submissionId: string): Promise<void>
 export async function submissionOfDrop(q: Db, dropId: string): Promise<string | undefined> {
   const r = await q("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id").where("d.id", dropId).first("s.submission_id");
   return r?.submission_id;
+}
+
+/** The revision in force and whether it is signed off, for pages that show the lock. */
+export async function lockStatus(q: Db, submissionId: string): Promise<{ revision: number; locked: boolean }> {
+  const [signed, reopened] = await Promise.all([listSignatures(q, submissionId), listReopenings(q, submissionId)]);
+  const revision = currentRevision({ reopenedRevisions: reopened.map((r) => r.revision) });
+  return { revision, locked: signed.some((s) => s.revision === revision) };
 }

@@ -18,6 +18,7 @@ export interface ReopeningRow {
   revision: number;
   reason: string;
   reopenedBy: string;
+  reopenedByName: string;
   reopenedAt: Date;
 }
 
@@ -32,8 +33,8 @@ export async function listSignatures(q: Db, submissionId: string): Promise<Signa
 }
 
 export async function listReopenings(q: Db, submissionId: string): Promise<ReopeningRow[]> {
-  const rows = await q("reopenings").where({ submission_id: submissionId }).orderBy("revision");
-  return rows.map((r) => ({ id: r.id, submissionId: r.submission_id, revision: r.revision, reason: r.reason, reopenedBy: r.reopened_by, reopenedAt: r.reopened_at }));
+  const rows = await q("reopenings as o").join("users as u", "u.id", "o.reopened_by").select("o.*", "u.name as reopened_by_name").where("o.submission_id", submissionId).orderBy("o.revision");
+  return rows.map((r) => ({ id: r.id, submissionId: r.submission_id, revision: r.revision, reason: r.reason, reopenedBy: r.reopened_by, reopenedByName: r.reopened_by_name, reopenedAt: r.reopened_at }));
 }
 
 export async function insertSignature(q: Db, s: { submissionId: string; revision: number; signedBy: string; results: unknown; changes: unknown }): Promise<string> {

@@ -21,7 +21,7 @@ export interface SignOffView {
   revision: number;
   locked: boolean;
   signatures: { revision: number; signedBy: string; signedAt: string; meaning: string; changes: ResultChanges | null }[];
-  reopenings: { revision: number; reason: string; reopenedAt: string }[];
+  reopenings: { revision: number; reason: string; reopenedBy: string; reopenedAt: string }[];
 }
 
 async function lockState(q: ReturnType<typeof db>, submissionId: string, reference: string) {
@@ -40,7 +40,7 @@ export async function getSignOff(actor: Actor, submissionId: string): Promise<Si
     revision,
     locked,
     signatures: signed.map((g) => ({ revision: g.revision, signedBy: g.signedByName, signedAt: g.signedAt.toISOString(), meaning: g.meaning, changes: (g.changes as ResultChanges | null) ?? null })),
-    reopenings: reopened.map((r) => ({ revision: r.revision, reason: r.reason, reopenedAt: r.reopenedAt.toISOString() })),
+    reopenings: reopened.map((r) => ({ revision: r.revision, reason: r.reason, reopenedBy: r.reopenedByName, reopenedAt: r.reopenedAt.toISOString() })),
   };
 }
 
@@ -54,7 +54,7 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
   }
   const results = await getSubmissionResults(actor, submissionId);
   if (results.balls.length === 0) throw new AppError("conflict", "This submission has no ball results yet, so there is nothing to sign off.");
-  if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending (${results.decision.explanation}); results can be signed off once it is made.`);
+  if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending. ${results.decision.explanation} Results can be signed off once it is made.`);
   await db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
     const s = (await findSubmission(trx, submissionId))!;

@@ -2,6 +2,7 @@ import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
 import { db } from "../db";
 import { findEdition, findEditionInForce } from "../editions/queries";
+import { lockStatus } from "../signoff/lock";
 import { AppError } from "../errors";
 import { findOrganisation } from "../organisations/queries";
 import { conditionFlags } from "../runs/conditions";
@@ -91,6 +92,7 @@ export async function getSubmission(actor: Actor, id: string): Promise<StaffSubm
     },
     rounds: grouped,
     flaggedRuns: grouped.flatMap((g) => g.samples.flatMap((x) => x.runs)).filter((r) => r.needsAcceptance).length,
+    signOff: await lockStatus(db(), id),
   };
 }
 

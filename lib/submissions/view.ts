@@ -45,4 +45,6 @@ export interface StaffSubmissionDetail {
   edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number; minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
   rounds: { round: number; samples: (SampleView & { runs: RunView[] })[] }[];
   flaggedRuns: number;
+  /** The revision in force and whether a lead has signed it off (which locks the submission). */
+  signOff: { revision: number; locked: boolean };
 }

@@ -15,6 +15,7 @@ describe("a lead invites a colleague in the browser", () => {
     const lead = await browser.newPage({ viewport: { width: 1280, height: 900 } });
     await signInAs(lead, demo.email("lead"), demo.password);
     await lead.waitForURL(`${APP_URL}/overview`);
+    await lead.getByRole("button", { name: "Administration" }).click();
     await lead.getByRole("link", { name: "Users" }).click();
     const form = lead.getByRole("region", { name: "Invite a person" });
     await form.getByLabel("Name").fill("Casey Colleague");
@@ -25,6 +26,7 @@ describe("a lead invites a colleague in the browser", () => {
     await lead.getByText(`Invitation sent to ${email}.`).waitFor();
     await screenshot(lead, "invite-sent");
 
+    await lead.getByRole("button", { name: "Administration" }).click();
     await lead.getByRole("link", { name: "Outbox" }).click();
     const message = lead.getByRole("listitem").filter({ hasText: email }).first();
     await message.waitFor();

@@ -63,6 +63,8 @@ describe("signing off a submission's results", () => {
     const [row] = await db()("signatures").where({ submission_id: submissionId });
     expect(row.results.decision.decision).toBe("meets limit");
     expect(await db()("audit_events").where({ entity: "submission", entity_id: submissionId, action: "submission.signed_off" })).toHaveLength(1);
+    // Every member of staff sees the lock on the submission itself.
+    expect((await json<{ signOff: unknown }>(await tech.get(`/api/submissions/${submissionId}`), 200)).signOff).toEqual({ revision: 1, locked: true });
   });
 
   it("once signed, readings, placement, runs and samples are refused with the reason", async () => {
@@ -79,7 +81,8 @@ describe("signing off a submission's results", () => {
   it("re-opening needs a reason, starts revision 2, and the next signature records what changed", async () => {
     expect(await message(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "short" }), 422)).toBeTruthy();
     const { signOff } = await json<{ signOff: SignOffView }>(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "A third ball arrived and is to be included." }), 201);
-    expect(signOff).toMatchObject({ revision: 2, locked: false, reopenings: [expect.objectContaining({ revision: 2 })] });
+    expect(signOff).toMatchObject({ revision: 2, locked: false, reopenings: [expect.objectContaining({ revision: 2, reason: "A third ball arrived and is to be included.", reopenedBy: expect.any(String) })] });
+    expect((await json<{ signOff: unknown }>(await lead.get(`/api/submissions/${submissionId}`), 200)).signOff).toEqual({ revision: 2, locked: false });
     expect((await db()("submissions").where({ id: submissionId }).first()).status).toBe("testing");
     expect(new Set((await db()("drops").whereIn("id", drops)).map((d) => d.state))).toEqual(new Set(["agreed"]));
     await ball("SO-3");

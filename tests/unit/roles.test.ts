@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { navFor } from "@/components/shell/nav-items";
+import { navFor, splitNav } from "@/components/shell/nav-items";
 import { roleSetProblem, selfChangeProblem, statusOf } from "@/lib/users/rules";
 
 const ORG = "6f1c1a36-5d0e-4a57-9a55-1f6f1a4a2b11";
@@ -41,10 +41,23 @@ describe("navFor", () => {
     const labels = (roles: Parameters<typeof navFor>[0], dev = true) => navFor(roles, dev).map((i) => i.label);
     expect(labels(["technician"])).toEqual(["Overview", "Submissions", "Editions", "Help"]);
     expect(labels(["reviewer"])).toEqual(["Overview", "Submissions", "Reading queue", "Help"]);
-    expect(labels(["lead"])).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Outbox", "Help"]);
-    expect(labels(["lead"], false)).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Help"]);
+    expect(labels(["lead"])).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Outbox", "Help"]);
+    expect(labels(["lead"], false)).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Help"]);
     expect(labels(["reviewer", "technician"])).toEqual(["Overview", "Submissions", "Reading queue", "Editions", "Help"]);
-    expect(labels(["lead", "reviewer"])).toEqual(["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Outbox", "Help"]);
+    expect(labels(["lead", "reviewer"])).toEqual(["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Outbox", "Help"]);
     expect(labels(["manufacturer"])).toEqual(["Our submissions", "Help"]);
+  });
+});
+
+describe("splitNav", () => {
+  const labels = (items: { label: string }[]) => items.map((i) => i.label);
+  it("keeps a lead's administration under one menu where its first item stood, and leaves a single item on the bar", () => {
+    const lead = splitNav(navFor(["lead", "reviewer"], true));
+    expect(labels(lead.before)).toEqual(["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement"]);
+    expect(labels(lead.admin)).toEqual(["Editions", "Organisations", "Users", "Audit", "Outbox"]);
+    expect(labels(lead.after)).toEqual(["Help"]);
+    const tech = splitNav(navFor(["technician"], true));
+    expect(labels(tech.before)).toEqual(["Overview", "Submissions", "Editions", "Help"]);
+    expect(tech.admin).toEqual([]);
   });
 });

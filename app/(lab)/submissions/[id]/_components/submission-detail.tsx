@@ -13,12 +13,14 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
   if (q.isPending) return <p className="text-ink-600" role="status">Loading the submission…</p>;
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   if (q.data.view !== "staff") return <Notice tone="error">This page is for laboratory staff.</Notice>;
-  const { submission, edition, rounds, flaggedRuns } = q.data;
+  const { submission, edition, rounds, flaggedRuns, signOff } = q.data;
   const sampleCount = rounds.reduce((n, r) => n + r.samples.length, 0);
+  // A signed-off submission refuses new samples and runs until it is re-opened: no forms that would only be refused.
+  const canChange = canEdit && !signOff.locked;
 
   return (
     <div className="space-y-8">
-      <SubmissionSummary submission={submission} edition={edition} />
+      <SubmissionSummary submission={submission} edition={edition} signOff={signOff} />
       {flaggedRuns > 0 && (
         <Notice tone="warn">
           <strong>
@@ -31,11 +33,11 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
         <h2 id="samples-heading" className="text-xl font-semibold">Samples</h2>
         {sampleCount === 0 && <p className="text-ink-600">No sample balls are recorded yet.</p>}
         {rounds.map((r) => (
-          <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canEdit} />
+          <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canChange} />
         ))}
       </section>
       <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canEdit} />
-      {canEdit && (
+      {canChange && (
         <div className="grid gap-6 lg:grid-cols-2">
           <AddSampleForm submissionId={submission.id} currentRound={submission.currentRound} />
           <ImportSamplesForm submissionId={submission.id} currentRound={submission.currentRound} />

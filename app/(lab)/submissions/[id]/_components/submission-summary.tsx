@@ -8,12 +8,13 @@ import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
 
 const link = "font-semibold text-wick-700 underline";
 
-export function SubmissionSummary({ submission: s, edition }: Pick<StaffSubmissionDetail, "submission" | "edition">) {
+export function SubmissionSummary({ submission: s, edition, signOff }: Pick<StaffSubmissionDetail, "submission" | "edition" | "signOff">) {
   const items = [
     { label: "Organisation", value: s.organisationName },
     { label: "Kind", value: KIND_LABELS[s.kind] },
     { label: "Status", value: <StatusBadge status={s.status} /> },
     { label: "Current round", value: s.currentRound },
+    { label: "Results revision", value: `${signOff.revision}${signOff.locked ? " (signed off)" : ""}` },
     { label: "Received", value: formatDay(s.receivedOn) },
     { label: "Specification edition", value: <Link href={`/editions/${edition.id}`} className={link}>{edition.name}</Link> },
     { label: "Weight classes", value: s.weightClassesLb.length ? s.weightClassesLb.map((lb) => `${lb} lb`).join(", ") : "not given" },
@@ -30,6 +31,11 @@ export function SubmissionSummary({ submission: s, edition }: Pick<StaffSubmissi
         </div>
         <Link href={`/submissions/${s.id}/results`} className="rounded-md bg-wick-600 px-4 py-2 font-semibold text-white hover:bg-wick-700">Results and decision</Link>
       </div>
+      {signOff.locked && (
+        <p data-testid="lock-notice" className="rounded-md bg-ok-100 px-3 py-2 text-sm font-semibold text-ok-700">
+          Locked: signed off as revision {signOff.revision}. Readings, rulings, runs and samples cannot be changed until a lead re-opens it.
+        </p>
+      )}
       <DetailList items={items} />
       <p className="text-sm text-ink-600">
         Judged against {edition.name}: {edition.dropsPerBall} drops per ball, at least {edition.minAbsorptionS} s absorption time.

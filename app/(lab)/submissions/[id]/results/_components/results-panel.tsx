@@ -1,5 +1,6 @@
 "use client";
 
+import type { ReactNode } from "react";
 import { useSubmissionResults } from "@/app/_client/results";
 import { KIND_LABELS } from "@/app/_client/submission-labels";
 import { Caution } from "@/components/shell/caution";
@@ -12,7 +13,8 @@ import { EditionValues } from "./edition-values";
 import { MeansDistribution } from "./means-distribution";
 import { SurveillancePanel } from "./surveillance-panel";
 
-export function ResultsPanel({ id }: { id: string }) {
+/** `signOff` (for leads) sits under the decision it signs. */
+export function ResultsPanel({ id, signOff }: { id: string; signOff?: ReactNode }) {
   const q = useSubmissionResults(id);
   if (q.isPending) return <p className="text-ink-600" role="status">Computing the results…</p>;
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
@@ -30,6 +32,7 @@ export function ResultsPanel({ id }: { id: string }) {
       <Downloads id={r.submission.id} />
       <Notice tone="warn"><Caution /></Notice>
       <DecisionPanel decision={r.decision} edition={r.edition} />
+      {signOff}
       {r.surveillance && <SurveillancePanel comparison={r.surveillance} />}
       <BallTable balls={r.balls} edition={r.edition} />
       {settled ? (
