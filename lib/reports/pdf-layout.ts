@@ -12,6 +12,7 @@ export const MARGIN = { top: 72, bottom: 70, left: 48, right: 48 };
 export const INK = "#1f2937";
 export const MUTED = "#4b5563";
 export const RULE = "#9ca3af";
+export const ALERT = "#b91c1c";
 
 export function newDoc(title: string): Doc {
   const doc = new PDFDocument({ size: "A4", margins: MARGIN, bufferPages: true, info: { Title: title, Creator: "Wickmark" } });
@@ -114,14 +115,23 @@ export function box(doc: Doc, title: string, lines: string[]): void {
   doc.fontSize(9);
 }
 
+/** "DRAFT" across the page, faint, behind nothing that matters: an unsigned report is never mistaken for a released one. */
+function watermark(doc: Doc): void {
+  const { width, height } = doc.page;
+  doc.save().rotate(-40, { origin: [width / 2, height / 2] }).font(BOLD).fontSize(110).fillColor(ALERT).fillOpacity(0.08);
+  doc.text("DRAFT", 0, height / 2 - 60, { width, align: "center", lineBreak: false });
+  doc.restore().fillOpacity(1);
+}
+
 /** Header (lab, title, reference, revision) and footer (caution, page n of m) on every page. */
-export function furnish(doc: Doc, header: { lab: string; title: string; reference: string; revision: string }, caution: string): void {
+export function furnish(doc: Doc, header: { lab: string; title: string; reference: string; revision: string; draft: boolean }, caution: string): void {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const w = contentWidth(doc);
     const saved = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
+    if (header.draft) watermark(doc);
     doc.font(BOLD).fontSize(9).fillColor(INK).text(header.lab, MARGIN.left, 30, { width: w * 0.4, lineBreak: false, ellipsis: true });
     doc.font(REGULAR).fontSize(9).text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w * 0.4, 30, { width: w * 0.6, align: "right", lineBreak: false });
     doc.moveTo(MARGIN.left, 46).lineTo(MARGIN.left + w, 46).lineWidth(0.6).strokeColor(RULE).stroke();
