@@ -11,7 +11,7 @@ const STATUS_WORDS = { meets: "meets", close: "close", below: "below", pending: 
 function revisionOf(r: ReportData, short = false): string {
   const rev = `Revision ${r.signOff.revision}`;
   if (r.signOff.signature) return rev;
-  return short ? `${rev} · DRAFT` : `${rev}, draft: not signed off`;
+  return short ? `${rev} · draft` : `${rev}, draft: not signed off`;
 }
 
 /** Under the title: who released this revision, or that it is a draft nobody has released. */
@@ -41,7 +41,8 @@ function front(doc: Doc, r: ReportData): void {
   ]);
   heading(doc, "Decision");
   const d = r.decision;
-  const lines = [d.explanation, `Next: ${d.nextAction}`];
+  // Once signed off, the next step the results screen shows is done: the report leaves it out.
+  const lines = r.signOff.signature ? [d.explanation] : [d.explanation, `Next: ${d.nextAction}`];
   if (d.tolerance) {
     const t = d.tolerance;
     lines.push(`Tolerance of the judged values: n ${t.n}, mean ${fixed(t.mean, 1)} s, SD ${fixed(t.sd, 2)} s, k ${fixed(t.k, 3)}, lower limit ${fixed(t.limit, 2)} s${d.finalRound ? "" : " (it decides only once every planned round is in)"}.`);
@@ -102,12 +103,12 @@ function dropsTable(doc: Doc, r: ReportData): void {
     ];
   });
   table(doc, [
-    { head: "Ball", width: 52 }, { head: "Drop", width: 26, align: "right" }, { head: "State", width: 40 },
-    { head: "1st dispense frame", width: 42, align: "right" }, { head: "1st clear frame", width: 38, align: "right" },
-    { head: "2nd dispense frame", width: 42, align: "right" }, { head: "2nd clear frame", width: 38, align: "right" },
-    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 38, align: "right" }, { head: "Readers (1st; 2nd)", width: 114 }, { head: "Dixon", width: 27 },
+    { head: "Ball", width: 52 }, { head: "Drop", width: 26, align: "right" }, { head: "State", width: 50 },
+    { head: "1st disp. frame", width: 42, align: "right" }, { head: "1st clear frame", width: 38, align: "right" },
+    { head: "2nd disp. frame", width: 42, align: "right" }, { head: "2nd clear frame", width: 38, align: "right" },
+    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 38, align: "right" }, { head: "Readers (1st; 2nd)", width: 104 }, { head: "Q", width: 27 },
   ], r.drops.length ? rows : [["No drops yet", "", "", "", "", "", "", "", "", "", ""]]);
-  paragraph(doc, "Frames are 0-based frame numbers of the drop's recording. Time: the agreed or ruled time. U: the larger expanded frame-quantisation uncertainty of the two readings. Q: the drop Dixon's Q flags; it still counts.", { size: 7.5, color: MUTED });
+  paragraph(doc, "Frames are 0-based frame numbers of the drop's recording; disp.: dispense. Time: the agreed or ruled time. U: the larger expanded frame-quantisation uncertainty of the two readings. Q: the drop Dixon's Q flags; it still counts.", { size: 7.5, color: MUTED });
 }
 
 function clips(doc: Doc, r: ReportData): void {
