@@ -4,8 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/lib/db";
 import { signedIn, type Client } from "../helpers/app";
 import { APP_URL, launch, screenshot, signInAs } from "../helpers/browser";
-import { demo, demoOrganisationId, makeUser } from "../helpers/fixtures";
-import { newEdition, newRun, newSample, newSubmission } from "../helpers/intake";
+import { demo, makeUser } from "../helpers/fixtures";
+import { newEdition, newRun, newSample, newSubmission, uniqueName } from "../helpers/intake";
 import { plainMp4 } from "../helpers/media";
 import { json, placeOnRun, read } from "../helpers/readings";
 
@@ -24,7 +24,8 @@ beforeAll(async () => {
   const [ua, ub] = [await makeUser(["reviewer"]), await makeUser(["reviewer"])];
   const [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
   await newEdition(lead, { effectiveFrom: "2005-06-01", minAbsorptionS: 0.5, guardBandS: 0.1, roundSizes: [2], readingToleranceS: 0.5 });
-  const org = await demoOrganisationId();
+  // A manufacturer of its own, so its list holds only this test's two submissions.
+  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Quillmere Spheres (invented)"), contactEmails: [] }), 201)).organisation.id;
   released = await newSubmission(lead, org, { receivedOn: "2005-06-02" });
   waiting = await newSubmission(lead, org, { receivedOn: "2005-06-02" });
   for (const serial of ["PR-1", "PR-2"]) {
@@ -59,6 +60,7 @@ describe("the manufacturer sees released results in the portal", () => {
     await state.waitFor();
     expect(await state.textContent()).toBe("The laboratory releases the results, with the test report, once a lead has reviewed and signed them off.");
     expect(await page.getByRole("link", { name: "Test report (PDF)" }).count()).toBe(0);
+    await screenshot(page, "portal-not-released");
   });
 
   it("opens the released submission: the decision, each ball, the signature, the cautions, and the report downloads as a PDF", async () => {
