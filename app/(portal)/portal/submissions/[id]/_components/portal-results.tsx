@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { Downloads } from "@/app/_client/report-downloads";
 import { s1, useSubmissionResults } from "@/app/_client/results";
 import { Caution } from "@/components/shell/caution";
 import { DetailList } from "@/components/ui/detail-list";
@@ -12,11 +13,6 @@ import type { ReleaseView } from "@/lib/signoff/release";
 // The manufacturer's view of its results: nothing until a lead signs them off; then the decision,
 // the per-ball table, the signature and the report and exports to download.
 
-const FILES = [
-  { file: "report.pdf", label: "Test report (PDF)" },
-  { file: "balls.csv", label: "Ball results (CSV)" },
-  { file: "drops.csv", label: "Drops (CSV)" },
-];
 const BALL_WORDS = { meets: "clear of the guard band", close: "close to the limit", below: "below the minimum", pending: "waiting" } as const;
 
 function Released({ id, release }: { id: string; release: ReleaseView }) {
@@ -42,13 +38,7 @@ function Released({ id, release }: { id: string; release: ReleaseView }) {
           { label: "Revision", value: g.revision },
         ]}
       />
-      <nav aria-label="Report and exports" className="flex flex-wrap gap-3">
-        {FILES.map((f) => (
-          <a key={f.file} href={`/api/submissions/${id}/${f.file}`} download className="rounded border border-wick-700 px-3 py-1.5 text-sm font-semibold text-wick-700 hover:bg-wick-100">
-            {f.label}
-          </a>
-        ))}
-      </nav>
+      <Downloads id={id} />
       <div className="overflow-x-auto rounded-lg border border-ink-100">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Results of each sample ball</caption>
