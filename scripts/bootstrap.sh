@@ -13,6 +13,8 @@ ls /usr/lib/postgresql/*/bin/postgres >/dev/null 2>&1 || need+=(postgresql)
 command -v ffmpeg >/dev/null 2>&1 && command -v ffprobe >/dev/null 2>&1 || need+=(ffmpeg)
 command -v setpriv >/dev/null 2>&1 || need+=(util-linux)
 if [ "$cmd" = test ] && ! [ -x /usr/bin/chromium ]; then need+=(chromium); fi
+# The report tests read the PDF back with pdftotext and render its pages with pdftoppm.
+if [ "$cmd" = test ] && ! { command -v pdftotext >/dev/null 2>&1 && command -v pdftoppm >/dev/null 2>&1; }; then need+=(poppler-utils); fi
 if [ ${#need[@]} -gt 0 ]; then
   echo "[wickmark] installing Debian packages: ${need[*]}"
   if [ "$(id -u)" -ne 0 ]; then sudo="sudo"; else sudo=""; fi

@@ -24,6 +24,12 @@ function FlaggedBadge({ n }: { n: number | undefined }) {
   );
 }
 
+/** The released report of a submission, for the manufacturer's list; a dash until a lead signs the results off. */
+function ReportLink({ row }: { row: SubmissionRow }) {
+  if (row.status !== "released") return <span className="text-ink-600"><span aria-hidden="true">—</span><span className="sr-only">not released yet</span></span>;
+  return <a href={`/api/submissions/${row.id}/report.pdf`} download className="whitespace-nowrap font-semibold text-wick-700 underline">Released report (PDF)<span className="sr-only"> of {row.reference}</span></a>;
+}
+
 function columns(basePath: string, withOrganisation: boolean) {
   return [
     col.accessor("reference", {
@@ -39,6 +45,8 @@ function columns(basePath: string, withOrganisation: boolean) {
     col.accessor("currentRound", { id: "round", header: "Round" }),
     ...(withOrganisation ? [col.accessor("sampleCount", { id: "samples", header: "Samples", enableSorting: false })] : []),
     col.accessor("receivedOn", { id: "received", header: "Received", cell: (c) => <span className="whitespace-nowrap">{formatDay(c.getValue())}</span> }),
+    // The manufacturer's list (no organisation column) links each released report.
+    ...(withOrganisation ? [] : [col.display({ id: "report", header: "Report", cell: (c) => <ReportLink row={c.row.original} /> })]),
   ];
 }
 

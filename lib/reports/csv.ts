@@ -15,10 +15,19 @@ export const BALL_COLUMNS = [
   "judged_value_s", "status", "dixon_q", "dixon_critical", "outlier_drop",
 ] as const;
 
+/**
+ * Text a spreadsheet would run as a formula: it starts with =, +, -, @, a tab or a carriage return
+ * (common practice: the OWASP "CSV Injection" guidance, from memory). papaparse prefixes such a
+ * cell with ' and quotes it. Numbers are written as numbers and never prefixed, and neither is text
+ * that is a plain number ("-0.5"); unlike papaparse's own pattern, this one also catches a formula
+ * followed by a line break.
+ */
+export const FORMULA_LIKE = /^(?![+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$)[=+\-@\t\r]/;
+
 const cell = (v: number | string | null | undefined) => (v === null || v === undefined ? "" : v);
 
-function csv(columns: readonly string[], rows: (string | number)[][]): string {
-  return Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n", quotes: false, escapeFormulae: true }) + "\r\n";
+export function csv(columns: readonly string[], rows: (string | number)[][]): string {
+  return Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n", quotes: false, escapeFormulae: FORMULA_LIKE }) + "\r\n";
 }
 
 export function dropsCsv(r: ReportData): string {

@@ -54,21 +54,21 @@ export interface ReportData {
   balls: BallResult[];
   decision: SubmissionDecision;
   clips: ReportClipRow[];
-  /** Optional: rulings, signature and revision changes, once a lead has ruled or signed. */
+  /** Rulings, the signature of the revision in force, the revision history and what changed. */
   signOff: SignOffPart;
 }
 
 export async function reportData(actor: Actor, submissionId: string): Promise<ReportData> {
   const s = await visibleSubmission(actor, submissionId);
-  assertCanSeeReport(actor, s);
   const q = db();
-  const [results, samples, runs, marks, clips, signOff] = await Promise.all([
+  const signOff = await signOffPart(q, s.id);
+  assertCanSeeReport(actor, s, signOff.history.some((h) => h.signature));
+  const [results, samples, runs, marks, clips] = await Promise.all([
     loadSubmissionResults(q, s),
     listSamples(q, s.id),
     listRunsOfSubmission(q, s.id),
     listReportDrops(q, s.id, SETTLED_STATES),
     listReportClips(q, s.id),
-    signOffPart(q, s.id),
   ]);
   const { edition, balls, decision } = results;
   const reportSamples = samples.map((x) => {

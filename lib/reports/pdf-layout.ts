@@ -12,6 +12,7 @@ export const MARGIN = { top: 72, bottom: 70, left: 48, right: 48 };
 export const INK = "#1f2937";
 export const MUTED = "#4b5563";
 export const RULE = "#9ca3af";
+export const ALERT = "#b91c1c";
 
 export function newDoc(title: string): Doc {
   const doc = new PDFDocument({ size: "A4", margins: MARGIN, bufferPages: true, info: { Title: title, Creator: "Wickmark" } });
@@ -114,17 +115,25 @@ export function box(doc: Doc, title: string, lines: string[]): void {
   doc.fontSize(9);
 }
 
+/** A red bar down the left edge of every page of a draft (a shape, so the text stays clean to copy). */
+function draftBar(doc: Doc): void {
+  doc.rect(MARGIN.left - 30, MARGIN.top - 20, 8, doc.page.height - MARGIN.top - MARGIN.bottom + 10).fill(ALERT);
+}
+
 /** Header (lab, title, reference, revision) and footer (caution, page n of m) on every page. */
-export function furnish(doc: Doc, header: { lab: string; title: string; reference: string; revision: string }, caution: string): void {
+export function furnish(doc: Doc, header: { lab: string; title: string; reference: string; revision: string; draft: boolean }, caution: string): void {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const w = contentWidth(doc);
     const saved = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
+    if (header.draft) draftBar(doc);
+    const accent = header.draft ? ALERT : RULE;
     doc.font(BOLD).fontSize(9).fillColor(INK).text(header.lab, MARGIN.left, 30, { width: w * 0.4, lineBreak: false, ellipsis: true });
     doc.font(REGULAR).fontSize(9).text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w * 0.4, 30, { width: w * 0.6, align: "right", lineBreak: false });
-    doc.moveTo(MARGIN.left, 46).lineTo(MARGIN.left + w, 46).lineWidth(0.6).strokeColor(RULE).stroke();
+    if (header.draft) doc.font(BOLD).fontSize(8).fillColor(ALERT).text("DRAFT: not signed off, not a released result", MARGIN.left, 50, { width: w, align: "right", lineBreak: false });
+    doc.fillColor(INK).moveTo(MARGIN.left, 46).lineTo(MARGIN.left + w, 46).lineWidth(header.draft ? 1.2 : 0.6).strokeColor(accent).stroke();
     const fy = doc.page.height - 56;
     doc.moveTo(MARGIN.left, fy - 4).lineTo(MARGIN.left + w, fy - 4).lineWidth(0.6).strokeColor(RULE).stroke();
     doc.font(REGULAR).fontSize(7).fillColor(MUTED).text(caution, MARGIN.left, fy, { width: w - 70 });

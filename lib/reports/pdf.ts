@@ -1,7 +1,7 @@
 import { formatTemperature } from "../units/rules";
 import type { ReportData } from "./data";
 import { CAUTION, editionRows, fixed, frameRate, utc, utcShort } from "./format";
-import { box, facts, furnish, heading, newDoc, paragraph, table, toBuffer, MUTED, type Doc } from "./pdf-layout";
+import { box, facts, furnish, heading, newDoc, paragraph, table, toBuffer, ALERT, MUTED, type Doc } from "./pdf-layout";
 
 // The test report as a PDF: one reader's walk from the submission to the decision and its evidence.
 
@@ -9,15 +9,25 @@ const TITLE = "Oil absorption test report";
 const STATUS_WORDS = { meets: "meets", close: "close", below: "below", pending: "pending" } as const;
 
 function revisionOf(r: ReportData, short = false): string {
-  if (r.signOff.signature) return `Revision ${r.signOff.signature.revision}`;
-  return short ? "Draft" : "Draft, not signed off";
+  const rev = `Revision ${r.signOff.revision}`;
+  if (r.signOff.signature) return rev;
+  return short ? `${rev} · draft` : `${rev}, draft: not signed off`;
+}
+
+/** Under the title: who released this revision, or that it is a draft nobody has released. */
+function status(doc: Doc, r: ReportData): void {
+  const g = r.signOff.signature;
+  if (g) paragraph(doc, `Signed off by ${g.by} on ${utc(g.at)}: ${g.meaning} (revision ${g.revision}).`, { bold: true });
+  else paragraph(doc, "DRAFT: not signed off. These results are not released; they may still change.", { bold: true, color: ALERT });
 }
 
 function front(doc: Doc, r: ReportData): void {
   const s = r.submission;
   doc.font("Noto-Bold").fontSize(18).text(TITLE);
   paragraph(doc, `${s.reference} · ${revisionOf(r)} · generated ${utc(r.generatedAt)}`, { color: MUTED });
-  doc.moveDown(0.6);
+  doc.moveDown(0.4);
+  status(doc, r);
+  doc.moveDown(0.4);
   paragraph(doc, `Caution: ${CAUTION}`, { size: 8.5, color: MUTED });
   heading(doc, "Submission");
   facts(doc, [
@@ -31,7 +41,8 @@ function front(doc: Doc, r: ReportData): void {
   ]);
   heading(doc, "Decision");
   const d = r.decision;
-  const lines = [d.explanation, `Next: ${d.nextAction}`];
+  // Once signed off, the next step the results screen shows is done: the report leaves it out.
+  const lines = r.signOff.signature ? [d.explanation] : [d.explanation, `Next: ${d.nextAction}`];
   if (d.tolerance) {
     const t = d.tolerance;
     lines.push(`Tolerance of the judged values: n ${t.n}, mean ${fixed(t.mean, 1)} s, SD ${fixed(t.sd, 2)} s, k ${fixed(t.k, 3)}, lower limit ${fixed(t.limit, 2)} s${d.finalRound ? "" : " (it decides only once every planned round is in)"}.`);
@@ -92,12 +103,12 @@ function dropsTable(doc: Doc, r: ReportData): void {
     ];
   });
   table(doc, [
-    { head: "Ball", width: 52 }, { head: "Drop", width: 26, align: "right" }, { head: "State", width: 40 },
-    { head: "1st dispense frame", width: 42, align: "right" }, { head: "1st clear frame", width: 38, align: "right" },
-    { head: "2nd dispense frame", width: 42, align: "right" }, { head: "2nd clear frame", width: 38, align: "right" },
-    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 38, align: "right" }, { head: "Readers (1st; 2nd)", width: 114 }, { head: "Dixon", width: 27 },
+    { head: "Ball", width: 52 }, { head: "Drop", width: 26, align: "right" }, { head: "State", width: 50 },
+    { head: "1st disp. frame", width: 42, align: "right" }, { head: "1st clear frame", width: 38, align: "right" },
+    { head: "2nd disp. frame", width: 42, align: "right" }, { head: "2nd clear frame", width: 38, align: "right" },
+    { head: "Time s", width: 42, align: "right" }, { head: "U (k = 2) s", width: 38, align: "right" }, { head: "Readers (1st; 2nd)", width: 104 }, { head: "Q", width: 27 },
   ], r.drops.length ? rows : [["No drops yet", "", "", "", "", "", "", "", "", "", ""]]);
-  paragraph(doc, "Frames are 0-based frame numbers of the drop's recording. Time: the agreed or ruled time. U: the larger expanded frame-quantisation uncertainty of the two readings. Q: the drop Dixon's Q flags; it still counts.", { size: 7.5, color: MUTED });
+  paragraph(doc, "Frames are 0-based frame numbers of the drop's recording; disp.: dispense. Time: the agreed or ruled time. U: the larger expanded frame-quantisation uncertainty of the two readings. Q: the drop Dixon's Q flags; it still counts.", { size: 7.5, color: MUTED });
 }
 
 function clips(doc: Doc, r: ReportData): void {
@@ -106,25 +117,37 @@ function clips(doc: Doc, r: ReportData): void {
   table(doc, [{ head: "File", width: 120 }, { head: "Frames", width: 40, align: "right" }, { head: "Rate fps", width: 52, align: "right" }, { head: "SHA-256", width: 287 }], rows.length ? rows : [["No recordings", "", "", ""]], 7);
 }
 
-function signOff(doc: Doc, r: ReportData): void {
+function rulings(doc: Doc, r: ReportData): void {
   heading(doc, "Rulings");
-  const { rulings, signature, changes } = r.signOff;
-  if (rulings.length === 0) paragraph(doc, "No rulings");
-  else table(doc, [{ head: "Ball", width: 60 }, { head: "Drop", width: 30, align: "right" }, { head: "Lead", width: 80 }, { head: "Accepted", width: 70 }, { head: "Time s", width: 45, align: "right" }, { head: "Reason", width: 214 }],
-    rulings.map((x) => [x.serial, String(x.dropOrdinal), `${x.lead}, ${utc(x.at)}`, x.accepted, fixed(x.timeS, 3), x.reason]));
+  const list = r.signOff.rulings;
+  if (list.length === 0) return paragraph(doc, "No rulings: every settled drop's two readings agreed within the edition's tolerance.");
+  table(doc, [{ head: "Ball", width: 56 }, { head: "Drop", width: 28, align: "right" }, { head: "Accepted", width: 92 }, { head: "Ruled time s", width: 44, align: "right" }, { head: "Lead, when (UTC)", width: 84 }, { head: "Reason", width: 195 }],
+    list.map((x) => [x.serial, String(x.dropOrdinal), x.accepted, fixed(x.timeS, 3), `${x.lead}, ${utcShort(x.at)}`, x.reason]));
+  paragraph(doc, "A lead settles a drop whose two readings disagree by accepting one of them or by reading it a third time; the readings themselves are never changed.", { size: 7.5, color: MUTED });
+}
+
+function signOff(doc: Doc, r: ReportData): void {
   heading(doc, "Sign-off");
-  if (!signature) paragraph(doc, "Not signed off: draft report", { bold: true });
+  const { signature, changes, history, revision } = r.signOff;
+  if (!signature) paragraph(doc, `Not signed off: draft report (revision ${revision}). A lead's signature releases the results.`, { bold: true, color: ALERT });
   else facts(doc, [["Signed by", signature.by], ["When", utc(signature.at)], ["Meaning", signature.meaning], ["Revision", String(signature.revision)]]);
   if (changes) {
-    paragraph(doc, `Changed since the previous revision (re-opened: ${changes.reopenReason}):`, { size: 8.5 });
+    doc.moveDown(0.5);
+    paragraph(doc, `Changed since revision ${revision - 1}`, { bold: true });
+    paragraph(doc, `Re-opened because: ${changes.reopenReason}`, { size: 8.5 });
     for (const l of changes.lines) paragraph(doc, `• ${l}`, { size: 8.5 });
+  }
+  if (history.length > 1) {
+    doc.moveDown(0.5);
+    table(doc, [{ head: "Revision", width: 46, align: "right" }, { head: "Re-opened (UTC), reason", width: 253 }, { head: "Signed off by, when (UTC)", width: 200 }],
+      history.map((h) => [String(h.revision), h.reopened ? `${utcShort(h.reopened.at)}: ${h.reopened.reason}` : "first issue", h.signature ? `${h.signature.by}, ${utcShort(h.signature.at)}` : "not signed off"]));
   }
 }
 
 /** Renders the report; the bytes are the whole PDF. */
 export async function renderReportPdf(r: ReportData): Promise<Buffer> {
   const doc = newDoc(`${TITLE} ${r.submission.reference}`);
-  for (const part of [front, edition, samples, balls, dropsTable, clips, signOff]) part(doc, r);
-  furnish(doc, { lab: r.labName, title: TITLE, reference: r.submission.reference, revision: revisionOf(r, true) }, CAUTION);
+  for (const part of [front, edition, samples, balls, dropsTable, clips, rulings, signOff]) part(doc, r);
+  furnish(doc, { lab: r.labName, title: TITLE, reference: r.submission.reference, revision: revisionOf(r, true), draft: !r.signOff.signature }, CAUTION);
   return toBuffer(doc);
 }

@@ -1,13 +1,12 @@
 import type { Actor } from "../auth/actor";
 import { db, type Db } from "../db";
 import { findEdition, type EditionRow } from "../editions/queries";
-import { AppError } from "../errors";
 import { listRunsOfSubmission } from "../runs/queries";
+import { assertReleased } from "../signoff/release";
 import { toRunView } from "../runs/view";
 import { listSamples } from "../samples/queries";
 import { visibleSubmission } from "../submissions/service";
 import { findSubmission, type SubmissionRow } from "../submissions/queries";
-import { isStaff } from "../users/rules";
 import { listResultDrops, SETTLED_STATES } from "./queries";
 import { submissionResults, type BallInput, type ResultLimits } from "./rules";
 import { compareWithApproval } from "./surveillance";
@@ -47,11 +46,11 @@ export async function loadSubmissionResults(q: Db, s: SubmissionRow) {
   return { edition, ...submissionResults(limits, await ballsOf(q, s, edition), s.currentRound) };
 }
 
-/** A submission's ball results and staged decision; for surveillance, the comparison with its approval. */
+/** A submission's ball results and staged decision; for surveillance, the comparison with its approval. Staff at any time, the manufacturer once released. */
 export async function getSubmissionResults(actor: Actor, id: string): Promise<ResultsView> {
   const s = await visibleSubmission(actor, id);
-  if (!isStaff(actor)) throw new AppError("forbidden", "The lab shows results to the manufacturer once a lead has released them.");
   const q = db();
+  await assertReleased(actor, s, "results", q);
   const own = await loadSubmissionResults(q, s);
   let surveillance = null;
   if (s.kind === "surveillance" && s.approvalSubmissionId) {

@@ -27,9 +27,33 @@ function toRuling(r: Record<string, any>): RulingRow {
   };
 }
 
+const rulings = (q: Db) => q("rulings as x").join("users as u", "u.id", "x.ruled_by").select("x.*", "u.name as ruled_by_name");
+
 export async function findRulingOfDrop(q: Db, dropId: string): Promise<RulingRow | undefined> {
-  const r = await q("rulings as x").join("users as u", "u.id", "x.ruled_by").select("x.*", "u.name as ruled_by_name").where("x.drop_id", dropId).first();
+  const r = await rulings(q).where("x.drop_id", dropId).first();
   return r ? toRuling(r) : undefined;
+}
+
+/** A ruling with the ball and drop it settled and the reader of the reading it accepted. */
+export interface SubmissionRulingRow extends RulingRow {
+  serial: string;
+  round: number;
+  dropOrdinal: number;
+  acceptedReader: string;
+}
+
+/** Every ruling on the submission's drops, by ball and drop. */
+export async function listRulingsOfSubmission(q: Db, submissionId: string): Promise<SubmissionRulingRow[]> {
+  const rows = await rulings(q)
+    .join("drops as d", "d.id", "x.drop_id")
+    .join("runs as r", "r.id", "d.run_id")
+    .join("samples as s", "s.id", "r.sample_id")
+    .join("readings as g", "g.id", "x.reading_id")
+    .join("users as gu", "gu.id", "g.reviewer_id")
+    .select("s.serial", "s.round", "d.ordinal", "gu.name as accepted_reader")
+    .where("s.submission_id", submissionId)
+    .orderBy([{ column: "s.round" }, { column: "s.serial" }, { column: "d.ordinal" }]);
+  return rows.map((r) => ({ ...toRuling(r), serial: r.serial, round: r.round, dropOrdinal: r.ordinal, acceptedReader: r.accepted_reader }));
 }
 
 export async function insertRuling(q: Db, r: Omit<RulingRow, "id" | "ruledAt" | "ruledByName">): Promise<{ id: string; ruledAt: Date }> {

@@ -157,6 +157,8 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/audit": { path: "/api/audit?pageSize=5", expect: leadOnly(200) },
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },
+  // Whether the results are released: anyone who may see the submission (another organisation's is not found).
+  "GET /api/submissions/[id]/release": { path: async () => `/api/submissions/${await submission()}/release`, expect: signedInOnly(200) },
   "GET /api/agreement": { path: "/api/agreement", expect: leadOnly(200) },
   // The report and exports follow the results: the manufacturer is refused until release.
   "GET /api/submissions/[id]/report.pdf": { path: async () => `/api/submissions/${await submission()}/report.pdf`, expect: staffOnly(200) },

@@ -1,8 +1,9 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { BALL_COLUMNS, ballsCsv } from "@/lib/reports/csv";
+import { BALL_COLUMNS, ballsCsv, csv, FORMULA_LIKE } from "@/lib/reports/csv";
 import type { ReportData } from "@/lib/reports/data";
 import { frameRate } from "@/lib/reports/format";
+import { changeLines } from "@/lib/reports/sign-off";
 import type { BallResult } from "@/lib/results/rules";
 
 // The exports' text form: RFC 4180 (IETF, 2005) quoting, section 2 rules 6 and 7: a field holding a
@@ -29,11 +30,43 @@ describe("balls.csv", () => {
   });
 });
 
+// Formula injection: OWASP's "CSV Injection" page (from memory) names =, +, -, @, tab and carriage
+// return as the characters that make a spreadsheet read a cell as a formula; prefixing ' keeps it text.
+describe("cells a spreadsheet could run as a formula", () => {
+  const line = (row: (string | number)[]) => csv(["a", "b", "c"], [row]).split("\r\n")[1];
+
+  it("writes negative numbers as numbers, unquoted and unprefixed", () => {
+    expect(line([-0.5, -12, -1.25e-7])).toBe("-0.5,-12,-1.25e-7");
+    expect(ballsCsv(data([ball({ mean: -0.25, sd: 0 })])).split("\r\n")[1]).toContain(",3,-0.25,0,");
+  });
+
+  it("leaves text that is a plain number alone", () => {
+    expect(line(["-0.5", "+3", "-.5"])).toBe("-0.5,+3,-.5");
+    expect(["-1e3", "12", "-7."].every((t) => !FORMULA_LIKE.test(t))).toBe(true);
+  });
+
+  it("prefixes formula-like text, also when a line break follows the formula", () => {
+    expect(line(["-1+2", "@SUM(A1:A9)", "+44 20 7946 0000"])).toBe(`"'-1+2","'@SUM(A1:A9)","'+44 20 7946 0000"`);
+    expect(line(["=HYPERLINK(\"http://x.test\")\nmore", "\tx", "\rx"])).toBe(`"'=HYPERLINK(""http://x.test"")\nmore","'\tx","'\rx"`);
+    const back = Papa.parse<string[]>(csv(["a"], [["=1+1\nx"]])).data[1];
+    expect(back).toEqual(["'=1+1\nx"]);
+  });
+});
+
 describe("frame rates in the report", () => {
   it("reads a nominal rational rate, else the average", () => {
     expect(frameRate("30000/1001", 29.97)).toBe("29.97");
     expect(frameRate("10/1", 10)).toBe("10");
     expect(frameRate(null, 24.5)).toBe("24.5");
     expect(frameRate(null, null)).toBe("—");
+  });
+});
+
+describe("what changed since the previous revision, in the report", () => {
+  it("writes the stored difference of two signed results as sentences", () => {
+    expect(changeLines({ balls: [{ serial: "A-1", mean: { before: 2.84, after: 2.9 }, status: { before: "close", after: "meets" } }], ballsAdded: ["A-3"], ballsRemoved: [], decision: { before: "next round", after: "meets limit" } })).toEqual([
+      "Decision: from next round to meets limit.", "A-1: mean from 2.840 s to 2.900 s; status from close to meets.", "Balls added: A-3.",
+    ]);
+    expect(changeLines({ balls: [], ballsAdded: [], ballsRemoved: [], decision: null })).toEqual(["No ball result and no decision changed."]);
   });
 });

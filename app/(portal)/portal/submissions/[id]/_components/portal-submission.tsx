@@ -5,6 +5,7 @@ import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
 import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
 import { useSubmission } from "@/app/_client/submissions";
+import { PortalResults } from "./portal-results";
 
 export function PortalSubmission({ id }: { id: string }) {
   const q = useSubmission(id);
@@ -29,6 +30,7 @@ export function PortalSubmission({ id }: { id: string }) {
         </div>
         <DetailList items={items} />
       </header>
+      <PortalResults id={s.id} />
       <section aria-labelledby="rounds-heading" className="space-y-2">
         <h2 id="rounds-heading" className="text-xl font-semibold">Samples received</h2>
         {s.samplesByRound.length === 0 ? (
