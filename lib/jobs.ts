@@ -15,6 +15,7 @@ export const QUEUES = {
   clipProxy: clipStep("clip-proxy"),
   clipThumbnails: clipStep("clip-thumbnails"),
   outboxSend: { name: "outbox-send", retryLimit: 5, retryDelay: 10, retryBackoff: true },
+  reviewerDigest: { name: "reviewer-digest", retryLimit: 3, retryDelay: 60, retryBackoff: true },
 } as const;
 
 export type QueueKey = keyof typeof QUEUES;

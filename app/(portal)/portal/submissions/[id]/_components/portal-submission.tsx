@@ -5,6 +5,7 @@ import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
 import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
 import { useSubmission } from "@/app/_client/submissions";
+import { PortalSampleRequests } from "./portal-sample-requests";
 
 export function PortalSubmission({ id }: { id: string }) {
   const q = useSubmission(id);
@@ -55,6 +56,7 @@ export function PortalSubmission({ id }: { id: string }) {
           </div>
         )}
       </section>
+      <PortalSampleRequests submissionId={s.id} />
     </div>
   );
 }
