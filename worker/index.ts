@@ -11,7 +11,7 @@ async function main() {
   const b = await boss();
   for (const q of Object.values(QUEUES)) {
     const handle = handlers[q.name];
-    await b.work(q.name, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 1 }, async (jobs) => {
+    await b.work(q.name, { batchSize: "batchSize" in q ? q.batchSize : 1, includeMetadata: true, pollingIntervalSeconds: 1 }, async (jobs) => {
       for (const job of jobs) await handle({ data: job.data as Record<string, unknown>, retryCount: job.retryCount, retryLimit: job.retryLimit });
     });
   }

@@ -7,9 +7,10 @@ import { queueMail } from "@/lib/notifications/outbox";
 import { samplesRequestedMail } from "@/lib/notifications/templates";
 import type { DropRow } from "@/lib/readings/drop-queries";
 import { signedIn, type Client } from "../helpers/app";
-import { demo, makeUser } from "../helpers/fixtures";
+import { demo, demoOrganisationId, makeUser } from "../helpers/fixtures";
+import { newRun, newSample, newSubmission } from "../helpers/intake";
 import { mailsTo, waitForMail, type FakeMail } from "../helpers/mailbox";
-import { json, mark, placedDrops, read } from "../helpers/readings";
+import { json, mark, placeOnRun, read } from "../helpers/readings";
 
 // Each person's switches for the optional notices, and the reviewers' daily digest. The digest runs
 // in the real worker (the test stack sets REVIEWER_DIGEST_EVERY_SECONDS); the runs for a fixed day
@@ -64,14 +65,17 @@ describe("the reviewers' daily digest", () => {
 
   beforeAll(async () => {
     const tech = await signedIn(demo.email("technician"), demo.password);
-    const placed = await placedDrops(tech);
-    n = placed.dropIds.length;
-    reference = (await db()("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id").join("submissions as sub", "sub.id", "s.submission_id").where("d.id", placed.dropIds[0]).first("sub.reference")).reference;
+    // Two balls, so there are at least four drops whatever the edition in force asks for a ball.
+    const s = await newSubmission(tech, await demoOrganisationId());
+    reference = s.reference;
+    const drops: string[] = [];
+    for (let i = 0; i < 2; i++) drops.push(...(await placeOnRun(tech, (await newRun(tech, (await newSample(tech, s.id)).id)).id)).dropIds);
+    n = drops.length;
     const [ur, ux, uy, uo] = [await makeUser(["reviewer"], { name: "Digest Reader" }), await makeUser(["reviewer"]), await makeUser(["reviewer"]), await makeUser(["reviewer"])];
     [r, skipped] = [ur, uo];
     const [cr, cx, cy, co] = await Promise.all([ur, ux, uy, uo].map((u) => signedIn(u.email, u.password)));
     await json(await co.request("PUT", "/api/account/notifications", { json: { optOut: ["reviewer.digest"] } }), 200);
-    const [d0, d1, d2, d3] = placed.dropIds;
+    const [d0, d1, d2, d3] = drops;
     await read(cx, d0, 2, 20); // read once by someone else: still waiting for R
     await read(cx, d1, 2, 20);
     await read(cy, d1, 2, 20); // agreed: waits for nobody
