@@ -34,7 +34,7 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
           <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canEdit} />
         ))}
       </section>
-      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canEdit} />
+      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canEdit} waiting={submission.status === "awaiting_samples"} />
       {canEdit && (
         <div className="grid gap-6 lg:grid-cols-2">
           <AddSampleForm submissionId={submission.id} currentRound={submission.currentRound} />
