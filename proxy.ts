@@ -23,5 +23,7 @@ export const config = {
     "/users/:path*",
     "/outbox/:path*",
     "/portal/:path*",
+    "/account/:path*",
+    "/mail/:path*",
   ],
 };

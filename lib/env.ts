@@ -34,6 +34,9 @@ export const envSchema = z.object({
   OUTBOX_SWEEP_SECONDS: z.coerce.number().int().min(1).default(30),
   OUTBOX_LEASE_SECONDS: z.coerce.number().int().min(5).default(300),
   OUTBOX_RETRY_BASE_SECONDS: z.coerce.number().int().min(1).default(30),
+  // Reviewers' digest: once a day at this time (UTC), or every N seconds when that is set (tests, demos).
+  REVIEWER_DIGEST_AT: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Give the digest time as HH:MM in UTC, for example 07:00.").default("07:00"),
+  REVIEWER_DIGEST_EVERY_SECONDS: z.coerce.number().int().min(1).optional(),
   // The benchmark's baseline route (one insert) answers only when this is on.
   BENCH_ROUTES: bool.default(false),
 });

@@ -14,7 +14,9 @@ export const QUEUES = {
   clipIndex: clipStep("clip-index"),
   clipProxy: clipStep("clip-proxy"),
   clipThumbnails: clipStep("clip-thumbnails"),
-  outboxSend: { name: "outbox-send", retryLimit: 5, retryDelay: 10, retryBackoff: true },
+  // Mail comes in bursts (a digest per reviewer): up to 10 rows a poll.
+  outboxSend: { name: "outbox-send", retryLimit: 5, retryDelay: 10, retryBackoff: true, batchSize: 10 },
+  reviewerDigest: { name: "reviewer-digest", retryLimit: 3, retryDelay: 60, retryBackoff: true },
 } as const;
 
 export type QueueKey = keyof typeof QUEUES;

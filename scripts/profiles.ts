@@ -51,6 +51,6 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     // Fewer rounds keep the many sign-ins of the suite quick; production keeps the default.
     bcryptRounds: 10,
     // Small parts so a test file spans several; quick expiry so a killed worker's job returns soon.
-    env: { CLIP_PART_SIZE_MB: "5", CLIP_JOB_EXPIRE_SECONDS: "20", JOB_MAINTENANCE_SECONDS: "2", OUTBOX_SWEEP_SECONDS: "2", OUTBOX_LEASE_SECONDS: "10", OUTBOX_RETRY_BASE_SECONDS: "1" },
+    env: { CLIP_PART_SIZE_MB: "5", CLIP_JOB_EXPIRE_SECONDS: "20", JOB_MAINTENANCE_SECONDS: "2", OUTBOX_SWEEP_SECONDS: "2", OUTBOX_LEASE_SECONDS: "10", OUTBOX_RETRY_BASE_SECONDS: "1", REVIEWER_DIGEST_EVERY_SECONDS: "3" },
   },
 };

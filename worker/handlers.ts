@@ -2,6 +2,7 @@ import { QUEUE_OF, runClipStep } from "../lib/clips/pipeline";
 import { STEPS } from "../lib/clips/rules";
 import { QUEUES } from "../lib/jobs";
 import { deliverOutboxRow } from "../lib/notifications/deliver";
+import { runReviewerDigest } from "../lib/notifications/digest";
 
 export interface JobInfo {
   data: Record<string, unknown>;
@@ -14,7 +15,7 @@ type QueueName = (typeof QUEUES)[keyof typeof QUEUES]["name"];
 
 const clipHandlers = Object.fromEntries(
   STEPS.map((step) => [QUEUES[QUEUE_OF[step]].name, (job: JobInfo) => runClipStep(step, String(job.data.clipId), job)]),
-) as Record<Exclude<QueueName, "ping" | "outbox-send">, Handler>;
+) as Record<Exclude<QueueName, "ping" | "outbox-send" | "reviewer-digest">, Handler>;
 
 /** One handler per queue in lib/jobs.ts; the type makes a missing one a compile error. */
 export const handlers: Record<QueueName, Handler> = {
@@ -22,4 +23,8 @@ export const handlers: Record<QueueName, Handler> = {
   async ping() {},
   ...clipHandlers,
   "outbox-send": (job) => deliverOutboxRow(String(job.data.outboxId)),
+  // Safe to run twice: one digest per reviewer per day.
+  "reviewer-digest": async () => {
+    await runReviewerDigest();
+  },
 };

@@ -2,11 +2,11 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
-import type { SampleRequestRow } from "@/lib/sample-requests/queries";
+import type { SampleRequest } from "@/lib/sample-requests/view";
 import type { AcknowledgeInput, SampleRequestInput } from "@/lib/sample-requests/schema";
 import { SUBMISSIONS } from "./submissions";
 
-export type SampleRequest = Omit<SampleRequestRow, "requestedAt" | "acknowledgedAt"> & { requestedAt: string; acknowledgedAt: string | null };
+export type { SampleRequest };
 
 const key = (submissionId: string) => ["sample-requests", submissionId] as const;
 

@@ -2,7 +2,7 @@ import nodemailer from "nodemailer";
 import { db, type Db } from "../db";
 import { env } from "../env";
 import { enqueue } from "../jobs";
-import { claimOutbox, listDueOutbox, markFailed, markSent, type OutboxRow } from "./queries";
+import { claimOutbox, takeDueOutbox, markFailed, markSent, type OutboxRow } from "./queries";
 import { MAX_ATTEMPTS, messageIdOf, retryDelaySeconds } from "./rules";
 
 // Delivery of outbox rows. At least once, never twice on purpose: a row is claimed atomically
@@ -41,7 +41,7 @@ export async function deliverOutboxRow(id: string): Promise<void> {
 
 /** The periodic sweep: a job for every due row, so an outage or a dead worker loses nothing. */
 export async function sweepOutbox(): Promise<number> {
-  const ids = await listDueOutbox(db(), env().OUTBOX_LEASE_SECONDS, MAX_ATTEMPTS);
+  const ids = await takeDueOutbox(db(), env().OUTBOX_LEASE_SECONDS, MAX_ATTEMPTS);
   for (const id of ids) await enqueue("outboxSend", { outboxId: id });
   return ids.length;
 }

@@ -1,10 +1,11 @@
 import type { Db } from "../db";
 import { env } from "../env";
 import type { DropRow } from "../readings/drop-queries";
+import { SETTLED_STATES } from "../results/queries";
 import { loadSubmissionResults } from "../results/service";
 import { findSubmission } from "../submissions/queries";
 import { queueMail } from "./outbox";
-import { insertBelowLimitReports, listReportedBelow } from "./report-queries";
+import { countUnsettledDrops, insertBelowLimitReports, listReportedBelow } from "./report-queries";
 import { organisationRecipients, recipientsWithRole } from "./queries";
 import { belowLimitMail, discrepancyMail, resultsReleasedMail } from "./templates";
 
@@ -19,10 +20,13 @@ export async function notifyDiscrepancy(trx: Db, drop: DropRow, differenceS: num
 
 /**
  * Manufacturer contacts: a ball's result fell below the limit during testing. Called when a drop
- * settles; each ball is reported once (below_limit_reports keeps the record).
+ * settles; each ball is reported once (below_limit_reports keeps the record). Cheap on the reading
+ * path: a ball has a result only once every drop of its run has settled, so until this drop
+ * completes its run one count is all it costs; the results are computed only when it does.
  */
-export async function notifyBelowLimit(trx: Db, submissionId: string): Promise<string[]> {
-  const s = await findSubmission(trx, submissionId);
+export async function notifyBelowLimit(trx: Db, drop: Pick<DropRow, "runId" | "submissionId">): Promise<string[]> {
+  if ((await countUnsettledDrops(trx, drop.runId, SETTLED_STATES)) > 0) return [];
+  const s = await findSubmission(trx, drop.submissionId);
   if (!s) return [];
   const results = await loadSubmissionResults(trx, s);
   const reported = new Set(await listReportedBelow(trx, s.id));

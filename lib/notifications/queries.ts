@@ -47,13 +47,21 @@ export async function markFailed(q: Db, id: string, error: string, retryInSecond
   await q("outbox").where({ id, status: "sending" }).update({ status: "failed", last_error: error.slice(0, 1000), next_attempt_at: q.raw("now() + make_interval(secs => ?)", [retryInSeconds]) });
 }
 
-/** Rows due for an attempt: pending or failed whose wait is over, or held in `sending` past the lease. */
-export async function listDueOutbox(q: Db, leaseSeconds: number, maxAttempts: number, limit = 100): Promise<string[]> {
-  const rows = await q("outbox")
-    .where("attempts", "<", maxAttempts)
-    .where((w) => w.where((p) => p.whereIn("status", ["pending", "failed"]).where("next_attempt_at", "<=", q.fn.now()))
-      .orWhere((s) => s.where("status", "sending").where("claimed_at", "<", q.raw("now() - make_interval(secs => ?)", [leaseSeconds]))))
-    .orderBy("created_at").limit(limit).select("id");
+/**
+ * Takes the rows due for an attempt (pending or failed whose wait is over, or held in `sending` past
+ * the lease) and holds each for one lease before it is due again, so a sweep every few seconds
+ * queues one job per row, not one per sweep while the worker catches up.
+ */
+export async function takeDueOutbox(q: Db, leaseSeconds: number, maxAttempts: number, limit = 100): Promise<string[]> {
+  const { rows } = await q.raw(
+    `update outbox set next_attempt_at = now() + make_interval(secs => ?)
+      where id in (select id from outbox
+        where attempts < ? and next_attempt_at <= now()
+          and (status in ('pending', 'failed') or (status = 'sending' and claimed_at < now() - make_interval(secs => ?)))
+        order by created_at limit ? for update skip locked)
+      returning id`,
+    [leaseSeconds, maxAttempts, leaseSeconds, limit],
+  );
   return rows.map((r: { id: string }) => r.id);
 }
 

@@ -1,13 +1,23 @@
 // The kinds of mail Wickmark sends, which of them a person may switch off, and the retry timing.
 // Pure: no database, no SMTP.
 
+// `roles`: who receives the kind; `why`: what an essential one is for, shown where it cannot be switched off.
 export const KINDS = {
-  "discrepancy.new": { label: "A new discrepancy between two readings (leads)", essential: false },
-  "ball.below_limit": { label: "A ball below the limit during testing (manufacturers)", essential: true },
-  "samples.requested": { label: "More samples requested (manufacturers)", essential: true },
-  "results.released": { label: "Results released (manufacturers)", essential: true },
-  "reviewer.digest": { label: "Daily digest of drops waiting for you (reviewers)", essential: false },
-} as const;
+  "discrepancy.new": { label: "A new discrepancy between two readings (leads)", essential: false, roles: ["lead"], why: null },
+  "ball.below_limit": {
+    label: "A ball below the limit during testing (manufacturers)", essential: true, roles: ["manufacturer"],
+    why: "a ball of your model failing the minimum during testing is something you are told at once, whatever your other settings.",
+  },
+  "samples.requested": {
+    label: "More samples requested (manufacturers)", essential: true, roles: ["manufacturer"],
+    why: "testing cannot go on until you send the samples, so the request always reaches you.",
+  },
+  "results.released": {
+    label: "Results released (manufacturers)", essential: true, roles: ["manufacturer"],
+    why: "the release of your results and test report is the outcome of your submission.",
+  },
+  "reviewer.digest": { label: "Daily digest of drops waiting for you (reviewers)", essential: false, roles: ["reviewer"], why: null },
+} as const satisfies Record<string, { label: string; essential: boolean; roles: readonly string[]; why: string | null }>;
 
 export type MailKind = keyof typeof KINDS;
 export const OPTIONAL_KINDS = (Object.keys(KINDS) as MailKind[]).filter((k) => !KINDS[k].essential);

@@ -3,9 +3,10 @@ import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
 import { db } from "../db";
 import { AppError } from "../errors";
-import { hasRole } from "../users/rules";
+import { hasRole, type Role } from "../users/rules";
 import { findOptOut, listOutbox, updateOptOut, type OutboxStatus } from "./queries";
 import { KINDS, OPTIONAL_KINDS, type MailKind } from "./rules";
+import type { NotificationSetting } from "./view";
 
 // Each person's notification settings, and the leads' view of the outbox.
 
@@ -13,11 +14,12 @@ export const notificationSettingsSchema = z.object({
   optOut: z.array(z.enum(OPTIONAL_KINDS as [MailKind, ...MailKind[]], { error: "That notice cannot be switched off." })).max(20),
 });
 
-export interface NotificationSetting { kind: MailKind; label: string; essential: boolean; on: boolean }
-
 export async function getMyNotificationSettings(actor: Actor): Promise<NotificationSetting[]> {
   const optOut = await findOptOut(db(), actor.id);
-  return (Object.keys(KINDS) as MailKind[]).map((k) => ({ kind: k, label: KINDS[k].label, essential: KINDS[k].essential, on: KINDS[k].essential || !optOut.includes(k) }));
+  return (Object.keys(KINDS) as MailKind[]).map((k) => {
+    const { label, essential, why, roles } = KINDS[k];
+    return { kind: k, label, essential, why, appliesToYou: roles.some((r) => actor.roles.includes(r as Role)), on: essential || !optOut.includes(k) };
+  });
 }
 
 /** Switches the caller's own optional notices off (listed) or on (not listed); essential ones stay on. */

@@ -13,10 +13,15 @@ const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`)
 const FOOT = "The governing specification and your laboratory's own accredited procedure decide; Wickmark's limits and defaults are examples.";
 const PREFS = (appUrl: string) => `You can switch off the optional notices at ${appUrl}/account.`;
 
-function build(kind: MailKind, subject: string, paras: string[], link: { href: string; label: string } | null, appUrl: string): MailContent {
-  const textParts = [...paras, ...(link ? [`${link.label}: ${link.href}`] : []), "", FOOT, PREFS(appUrl)];
+/** A paragraph, or a list (an array) of short lines. */
+type Para = string | string[];
+
+function build(kind: MailKind, subject: string, paras: Para[], link: { href: string; label: string } | null, appUrl: string): MailContent {
+  const asText = (p: Para) => (Array.isArray(p) ? p.map((l) => `- ${l}`).join("\n") : p);
+  const asHtml = (p: Para) => (Array.isArray(p) ? `<ul>${p.map((l) => `<li>${esc(l)}</li>`).join("")}</ul>` : `<p>${esc(p)}</p>`);
+  const textParts = [...paras.map(asText), ...(link ? [`${link.label}: ${link.href}`] : []), "", FOOT, PREFS(appUrl)];
   const html = [
-    ...paras.map((p) => `<p>${esc(p)}</p>`),
+    ...paras.map(asHtml),
     ...(link ? [`<p><a href="${esc(link.href)}">${esc(link.label)}</a></p>`] : []),
     `<p style="color:#555;font-size:90%">${esc(FOOT)} ${esc(PREFS(appUrl))}</p>`,
   ].join("");
@@ -50,9 +55,17 @@ export function resultsReleasedMail(o: { appUrl: string; submissionId: string; r
     { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "See the results in the portal" }, o.appUrl);
 }
 
-export function reviewerDigestMail(o: { appUrl: string; name: string; waiting: number; oldest: string | null }): MailContent {
-  const oldest = o.oldest ? ` The oldest has waited since ${o.oldest}.` : "";
-  return build("reviewer.digest", `${o.waiting} drop${o.waiting === 1 ? "" : "s"} waiting for you to read`,
-    [`Hello ${o.name},`, `${o.waiting} drop${o.waiting === 1 ? " is" : "s are"} waiting for your reading.${oldest}`],
+const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+const MAX_LISTED = 20;
+
+/** Counts only: how many drops wait and in which submissions, never a drop's state or another reader's work. */
+export function reviewerDigestMail(o: { appUrl: string; name: string; day: string; waiting: number; submissions: { reference: string; count: number }[]; oldest: Date | null }): MailContent {
+  const lines = o.submissions.slice(0, MAX_LISTED).map((s) => `${s.reference}: ${plural(s.count, "drop")}`);
+  const rest = o.submissions.length - lines.length;
+  if (rest > 0) lines.push(`and ${plural(rest, "more submission")}`);
+  const oldest = o.oldest ? [`The oldest has waited since ${o.oldest.toISOString().slice(0, 16).replace("T", " ")} UTC.`] : [];
+  return build("reviewer.digest", `${o.day}: ${plural(o.waiting, "drop")} waiting for you to read`,
+    [`Hello ${o.name},`, `${o.waiting === 1 ? "One drop is" : `${o.waiting} drops are`} waiting for your reading, in ${plural(o.submissions.length, "submission")}:`, lines, ...oldest,
+      "Each drop is read blind: you see another reader's marks only once both readings are in."],
     { href: `${o.appUrl}/queue`, label: "Open your reading queue" }, o.appUrl);
 }

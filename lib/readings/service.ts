@@ -130,7 +130,7 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
     await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
     // Mail in the same transaction: leads for a new discrepancy, the manufacturer for a ball newly below the limit.
     if (o.state === "discrepancy") await notifyDiscrepancy(trx, drop, outcome.timeDifferenceS);
-    if (o.state === "agreed") await notifyBelowLimit(trx, drop.submissionId);
+    if (o.state === "agreed") await notifyBelowLimit(trx, drop);
     return toDropView(actor, { ...drop, ...outcome }, after);
   });
 }

@@ -3,6 +3,7 @@ import { recordChange } from "../audit/record";
 import { findFrameIndex } from "../clips/index-queries";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
+import { notifyBelowLimit } from "../notifications/events";
 import { findDrop, type DropRow } from "../readings/drop-queries";
 import { assertUnlocked } from "../signoff/lock";
 import { assertCanSeeDrops } from "../readings/policy";
@@ -61,6 +62,8 @@ export async function ruleDrop(actor: Actor, dropId: string, input: RulingInput)
     }
     const { id } = await insertRuling(trx, { dropId, chosen: input.chosen, readingId, timeS, reason: input.reason, ruledBy: actor.id });
     await setRuled(trx, dropId, timeS);
+    // A ruled drop has settled: it may complete a ball that is below the limit.
+    await notifyBelowLimit(trx, drop);
     const after = { dropId, chosen: input.chosen, readingId, timeS, reason: input.reason, ...(third ? { dispenseFrame: third.dispenseFrame, clearFrame: third.clearFrame } : {}) };
     await recordChange(trx, actor, { action: "ruling.made", entity: "ruling", entityId: id, after });
     await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: dropId, before: { state: drop.state, agreedTimeS: drop.agreedTimeS }, after: { state: "ruled", agreedTimeS: timeS } });

@@ -1,20 +1,5 @@
 import type { Db } from "../db";
-
-export interface SampleRequestRow {
-  id: string;
-  submissionId: string;
-  round: number;
-  count: number;
-  weight: string;
-  dueBy: string;
-  note: string;
-  requestedByName: string;
-  requestedAt: Date;
-  acknowledgedByName: string | null;
-  acknowledgedAt: Date | null;
-  shippingDetails: string | null;
-  shippedOn: string | null;
-}
+import type { SampleRequestRow } from "./view";
 
 const base = (q: Db) =>
   q("sample_requests as r")

@@ -10,7 +10,8 @@ import { assertCanEditIntake } from "../submissions/policy";
 import { lockSubmission } from "../submissions/queries";
 import { visibleSubmission } from "../submissions/service";
 import { hasRole } from "../users/rules";
-import { acknowledgeRow, findSampleRequest, insertSampleRequest, listSampleRequests as selectRequests, startRound, type SampleRequestRow } from "./queries";
+import { acknowledgeRow, findSampleRequest, insertSampleRequest, listSampleRequests as selectRequests, startRound } from "./queries";
+import type { SampleRequestRow } from "./view";
 import type { AcknowledgeInput, SampleRequestInput } from "./schema";
 
 // Requests for more samples: the lab asks for the next round, the manufacturer acknowledges and

@@ -3,9 +3,9 @@ import { existsSync, mkdirSync, rmSync } from "node:fs";
 import path from "node:path";
 import { proxyArgs } from "../../lib/video/proxy";
 import { renderSyntheticClip } from "../clips/synth-clip";
+import { PROFILES } from "../profiles";
 import { projectRoot } from "../services/service";
 import { benchApi } from "./api";
-import { benchPlayer } from "./player";
 
 const arg = (name: string, fallback: string) => {
   const i = process.argv.indexOf(`--${name}`);
@@ -18,9 +18,14 @@ async function main() {
   // proxy with another keyframe interval than the worker's. The API part:
   // --connections N (default 50), --api-rounds N (default 4), --per-connection N (default 10).
   const only = arg("only", "all");
+  // The bench's stack runs on the test profile's ports (moved by WICKMARK_PORT_OFFSET); its clients
+  // must never talk to whatever answers on the default test port.
+  process.env.APP_URL = `http://127.0.0.1:${PROFILES.test.ports.app}`;
   if (!["all", "worker", "player", "api"].includes(only)) throw new Error(`--only takes worker, player or api, not ${only}`);
   if (only === "all" || only === "worker") await benchWorker();
-  if (only === "all" || only === "player") await benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080, gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined });
+  // Imported when used: the player brings tests/helpers/app, whose APP_URL is read once, at import,
+  // and must already be the bench stack's (set above).
+  if (only === "all" || only === "player") await (await import("./player")).benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080, gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined });
   if (only === "all" || only === "api") await reportApi();
 }
 

@@ -12,7 +12,7 @@ import { useNextRound, useRequestSamples, useSampleRequests } from "@/app/_clien
 const inTwoWeeks = () => new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10);
 
 /** Requests for more samples, with the manufacturer's acknowledgement and shipping details; the form asks for the next round. */
-export function SampleRequestsPanel({ submissionId, currentRound, weights, canEdit }: { submissionId: string; currentRound: number; weights: number[]; canEdit: boolean }) {
+export function SampleRequestsPanel({ submissionId, currentRound, weights, canEdit, waiting }: { submissionId: string; currentRound: number; weights: number[]; canEdit: boolean; waiting: boolean }) {
   const list = useSampleRequests(submissionId);
   const next = useNextRound(submissionId);
   const ask = useRequestSamples(submissionId);
@@ -46,7 +46,8 @@ export function SampleRequestsPanel({ submissionId, currentRound, weights, canEd
           </li>
         ))}
       </ul>
-      {canEdit && next.isSuccess && (
+      {canEdit && waiting && <p className="text-ink-600">Round {currentRound} is waiting for its samples; the next round can be requested once they are in.</p>}
+      {canEdit && !waiting && next.isSuccess && (
         <form onSubmit={onSubmit} noValidate className="grid gap-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm md:grid-cols-2">
           <h3 className="text-lg font-semibold md:col-span-2">Request round {round}</h3>
           {next.data && <p className="text-sm text-ink-600 md:col-span-2">The staged decision asks for round {next.data.round} with {next.data.size} samples.</p>}

@@ -36,7 +36,7 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
           <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canChange} />
         ))}
       </section>
-      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canEdit} />
+      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canChange} waiting={submission.status === "awaiting_samples"} />
       {canChange && (
         <div className="grid gap-6 lg:grid-cols-2">
           <AddSampleForm submissionId={submission.id} currentRound={submission.currentRound} />

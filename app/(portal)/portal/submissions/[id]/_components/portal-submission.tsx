@@ -6,6 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
 import { useSubmission } from "@/app/_client/submissions";
 import { PortalResults } from "./portal-results";
+import { PortalSampleRequests } from "./portal-sample-requests";
 
 export function PortalSubmission({ id }: { id: string }) {
   const q = useSubmission(id);
@@ -57,6 +58,7 @@ export function PortalSubmission({ id }: { id: string }) {
           </div>
         )}
       </section>
+      <PortalSampleRequests submissionId={s.id} />
     </div>
   );
 }

@@ -1,0 +1,73 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { closeDb } from "@/lib/db";
+import { signedIn, type Client } from "../helpers/app";
+import { demo, makeUser } from "../helpers/fixtures";
+import { newEdition, newRun, newSample, newSubmission, uniqueName } from "../helpers/intake";
+import { mailsTo, waitForMail } from "../helpers/mailbox";
+import { plainMp4 } from "../helpers/media";
+import { json, placeOnRun, read } from "../helpers/readings";
+
+// A ball below the limit during testing is mailed to the manufacturer once, when its result
+// settles, and is not mailed again when later drops settle. The clip runs at exactly 25 fps, so a
+// reading from frame 5 to frame 30 takes 1.00 s; the test's own edition asks for at least 2.0 s
+// (an example value chosen to suit 4 s clips, three drops a ball).
+let lead: Client;
+let a: Client;
+let b: Client;
+let makerEmail: string;
+let submission: { id: string; reference: string };
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+async function ballWithDrops(serial: string): Promise<string[]> {
+  const sample = await newSample(lead, submission.id, { serial });
+  return (await placeOnRun(lead, (await newRun(lead, sample.id)).id, { file: plainMp4(undefined, 4) })).dropIds;
+}
+const readBoth = async (dropId: string) => {
+  await read(a, dropId, 5, 30);
+  await read(b, dropId, 5, 30);
+};
+
+beforeAll(async () => {
+  lead = await signedIn(demo.email("lead"), demo.password);
+  const [ua, ub] = [await makeUser(["reviewer"]), await makeUser(["reviewer"])];
+  [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
+  // The only edition in force on 2005-07-02, so the submission received that day is judged by it.
+  await newEdition(lead, { effectiveFrom: "2005-07-01", minAbsorptionS: 2.0, guardBandS: 0.3, dropsPerBall: 3, roundSizes: [2, 3], readingToleranceS: 0.5 });
+  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Below-limit maker (invented)") }), 201)).organisation;
+  makerEmail = (await makeUser(["manufacturer"], { organisationId: org.id })).email;
+  submission = await newSubmission(lead, org.id, { receivedOn: "2005-07-02" });
+}, 60_000);
+afterAll(() => closeDb());
+
+describe("a ball below the limit during testing", () => {
+  it("is mailed to the manufacturer once its last drop settles, and not again on the next drop", async () => {
+    const first = await ballWithDrops("BL-1");
+    const second = await ballWithDrops("BL-2");
+    await readBoth(first[0]);
+    await readBoth(first[1]);
+    await sleep(4000);
+    expect(await mailsTo(makerEmail)).toHaveLength(0);
+    await readBoth(first[2]);
+    const [mail] = await waitForMail(makerEmail, 1, 30_000);
+    expect(mail.subject).toMatch(new RegExp(`^${submission.reference} .*: a ball is below the limit during testing$`));
+    expect(mail.text).toContain("ball BL-1: mean 1.0 s");
+    expect(mail.text).toContain("below the minimum of 2.0 s");
+    expect(mail.text).toContain("this is not the decision");
+    expect(mail.text).toContain(`/portal/submissions/${submission.id}`);
+
+    // The next drop settles (another ball's): BL-1 is not reported again.
+    await readBoth(second[0]);
+    await sleep(4000);
+    expect(await mailsTo(makerEmail)).toHaveLength(1);
+
+    // BL-2's result settles below the limit too: one more mail, about BL-2 alone.
+    await readBoth(second[1]);
+    await readBoth(second[2]);
+    const mails = await waitForMail(makerEmail, 2, 30_000);
+    const newest = mails.find((m) => m.text.includes("BL-2"))!;
+    expect(newest.text).toContain("ball BL-2: mean 1.0 s");
+    expect(newest.text).not.toContain("BL-1");
+    await sleep(3000);
+    expect(await mailsTo(makerEmail)).toHaveLength(2);
+  }, 300_000);
+});
