@@ -142,7 +142,7 @@ describe("drops in the browser: placed on a recording, queued for reviewers, lis
       await row.getByText(text, { exact: true }).waitFor();
     }
     await screenshot(lead, "discrepancies");
-    await row.getByRole("link", { name: `Drop 1 of sample ${serial}` }).click();
+    await row.getByRole("link", { name: `Drop 1 of sample ${serial}`, exact: true }).click();
     await lead.waitForURL(`${APP_URL}/drops/${d1.id}`);
   });
 });

@@ -1,12 +1,9 @@
-import { mkdtempSync } from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/lib/db";
 import { stopBoss } from "@/lib/jobs";
 import { DEMO_BALLS, DEMO_READ_SUBMISSION } from "@/seeds/demo-results-plan";
-import { seedDemoReadings } from "@/seeds/demo-results";
+import { ensureDemoReadings } from "../helpers/demo-readings";
 import { APP_URL, launch, screenshot, signInAs } from "../helpers/browser";
 import { demo } from "../helpers/fixtures";
 
@@ -15,10 +12,9 @@ import { demo } from "../helpers/fixtures";
 let browser: Browser;
 let page: Page;
 let submissionId: string;
-const dir = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wickmark-results-"));
 
 beforeAll(async () => {
-  const r = await seedDemoReadings(db(), dir, () => {}, { width: 160, height: 90, fps: "10", noise: 2, clipTimeoutS: 600 });
+  const r = await ensureDemoReadings();
   expect(r.problems).toEqual([]);
   submissionId = (await db()("submissions").where({ reference: DEMO_READ_SUBMISSION }).first("id")).id;
   browser = await launch();

@@ -13,8 +13,6 @@ import { CAUTION } from "@/lib/reports/format";
 import type { ReleaseView } from "@/lib/signoff/release";
 import { BEING_REVISED, NOT_RELEASED } from "@/lib/signoff/release-policy";
 import type { ResultsView } from "@/lib/results/view";
-import { DEMO_READ_SUBMISSION } from "@/seeds/demo-results-plan";
-import { seedDemoReadings } from "@/seeds/demo-results";
 import { signedIn, type Client } from "../helpers/app";
 import { demo, makeUser } from "../helpers/fixtures";
 import { newEdition, newRun, newSample, newSubmission } from "../helpers/intake";
@@ -210,19 +208,4 @@ describe("the test report and exports", () => {
     pages("draft-2");
     pages("signed-2");
   }, 120_000);
-
-  it("renders the demo's read submission", async () => {
-    const r = await seedDemoReadings(db(), tmp, () => {}, { width: 160, height: 90, fps: "10", noise: 2, clipTimeoutS: 600 });
-    expect(r.problems).toEqual([]);
-    const id = (await db()("submissions").where({ reference: DEMO_READ_SUBMISSION }).first("id")).id;
-    const t0 = performance.now();
-    const res = await lead.get(`/api/submissions/${id}/report.pdf`);
-    const bytes = Buffer.from(await res.arrayBuffer());
-    // A figure for the record, not a target: speed belongs in benchmarks.
-    console.log(`report of ${DEMO_READ_SUBMISSION}: ${bytes.length} bytes in ${(performance.now() - t0).toFixed(0)} ms`);
-    expect(res.status).toBe(200);
-    writeFileSync(path.join(tmp, "demo.pdf"), bytes);
-    execFileSync("pdftoppm", ["-png", "-r", "80", path.join(tmp, "demo.pdf"), path.join(SCREENSHOTS, "report-demo")]);
-    expect(oneLine(execFileSync("pdftotext", [path.join(tmp, "demo.pdf"), "-"], { encoding: "utf8" }))).toContain(DEMO_READ_SUBMISSION);
-  }, 900_000);
 });
