@@ -44,10 +44,16 @@ describe("intake screens: flagged runs in the list, and the weight field's width
       await page.setViewportSize({ width, height: 900 });
       await page.goto(`${APP_URL}/submissions/${s.id}`);
       const form = page.getByRole("region", { name: "Add a sample" });
-      const weight = await form.getByLabel("Weight", { exact: true }).boundingBox();
+      await form.getByLabel("Unit of weight").waitFor();
+      // Both boxes from one layout pass, so a panel loading elsewhere cannot move one between the two reads.
+      const [weight, unit] = await form.evaluate((el) =>
+        ["#sample-weight", "#sample-weight-unit"].map((sel) => {
+          const r = el.querySelector(sel)!.getBoundingClientRect();
+          return { width: r.width, y: r.y };
+        }),
+      );
       // 8rem holds about eight digits at the form's font size.
       expect(weight!.width, `at ${width} px`).toBeGreaterThanOrEqual(128);
-      const unit = await form.getByLabel("Unit of weight").boundingBox();
       expect(unit!.width, `at ${width} px`).toBeGreaterThanOrEqual(64);
       expect(Math.abs(unit!.y - weight!.y), `unit beside the number at ${width} px`).toBeLessThan(4);
     }

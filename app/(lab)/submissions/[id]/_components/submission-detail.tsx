@@ -36,13 +36,14 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
           <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canChange} />
         ))}
       </section>
-      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canChange} waiting={submission.status === "awaiting_samples"} />
       {canChange && (
         <div className="grid gap-6 lg:grid-cols-2">
           <AddSampleForm submissionId={submission.id} currentRound={submission.currentRound} />
           <ImportSamplesForm submissionId={submission.id} currentRound={submission.currentRound} />
         </div>
       )}
+      {/* After the sample forms: the requests load on their own, and must not push a form the technician is typing into. */}
+      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canChange} waiting={submission.status === "awaiting_samples"} />
     </div>
   );
 }
