@@ -7,6 +7,7 @@ import { env } from "../env";
 import { AppError } from "../errors";
 import { enqueue } from "../jobs";
 import { completeMultipartUpload, createMultipartUpload, headObject, objectExists, presignUploadPart } from "../storage";
+import { assertUnlocked } from "../signoff/lock";
 import { assertCanEditIntake } from "../submissions/policy";
 import { visibleClip, visibleRunForClips } from "./access";
 import { findUpload, insertClip, insertSteps, insertUpload, listParts, markUploadCompleted, updateClip, upsertPart } from "./queries";
@@ -20,8 +21,10 @@ type In<T extends z.ZodType> = z.output<T>;
  * A file that cannot be accepted from its size alone is kept on record as rejected, with the reason.
  */
 export async function startUpload(actor: Actor, runId: string, v: In<typeof startUploadSchema>) {
-  await visibleRunForClips(actor, db(), runId);
+  const { submissionId } = await visibleRunForClips(actor, db(), runId);
   assertCanEditIntake(actor);
+  // A signed-off submission takes no new evidence until a lead re-opens it; refused before any storage is touched.
+  await assertUnlocked(db(), submissionId);
   const max = env().CLIP_MAX_BYTES;
   const refusal =
     v.size === 0 ? "The file is empty (0 bytes). Export the recording again and upload the new file."

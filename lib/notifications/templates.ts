@@ -10,7 +10,7 @@ export interface MailContent {
 }
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-const FOOT = "The governing specification and your laboratory's own accredited procedure decide; Wickmark's limits and defaults are examples.";
+const FOOT = "The governing specification and the testing laboratory's own accredited procedure decide; Wickmark's limits and defaults are examples.";
 const PREFS = (appUrl: string) => `You can switch off the optional notices at ${appUrl}/account.`;
 
 /** A paragraph, or a list (an array) of short lines. */

@@ -77,7 +77,7 @@ describe("the manufacturer sees released results in the portal", () => {
     const leadName = (await db()("users").where({ email: demo.email("lead") }).first("name")).name;
     expect(await results.textContent()).toContain(`Signed off by${leadName}When`);
     expect(await results.textContent()).toMatch(/Meaningresults reviewed and releasedRevision1/);
-    expect(await results.getByText("The governing specification and your laboratory").count()).toBe(1);
+    expect(await results.getByText("The governing specification and the testing laboratory").count()).toBe(1);
     await screenshot(page, "portal-released-submission");
 
     const link = results.getByRole("link", { name: "Test report (PDF)" });

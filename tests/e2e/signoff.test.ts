@@ -108,6 +108,8 @@ describe("the lead's desk", () => {
     await expect.poll(() => panel.getByTestId("signoff-state").textContent(), { timeout: 20_000 }).toMatch(/^Locked: signed off as revision 1\./);
     const signature = panel.getByTestId("signature");
     expect(await signature.textContent()).toMatch(/Revision 1 signed off by .*Meaning of the signature: “results reviewed and released”\.First signature/);
+    // The decision panel no longer asks for a sign-off that has happened.
+    await page.getByRole("region", { name: /^Decision after round/ }).getByText("Nothing: the results are signed off and released.", { exact: false }).waitFor();
     await screenshot(page, "signoff-signed");
 
     await page.goto(`${APP_URL}/submissions/${submissionId}`);

@@ -67,7 +67,7 @@ describe("signing off a submission's results", () => {
     expect((await json<{ signOff: unknown }>(await tech.get(`/api/submissions/${submissionId}`), 200)).signOff).toEqual({ revision: 1, locked: true });
   });
 
-  it("once signed, readings, placement, runs and samples are refused with the reason", async () => {
+  it("once signed, readings, placement, runs, samples and new clips are refused with the reason", async () => {
     const reviewer = await makeUser(["reviewer"]);
     const c = await signedIn(reviewer.email, reviewer.password);
     expect(await message(await c.post(`/api/drops/${drops[0]}/readings`, { dispenseFrame: 1 }), 409)).toBe(LOCKED(1));
@@ -75,6 +75,9 @@ describe("signing off a submission's results", () => {
     expect(await message(await tech.request("PUT", `/api/drops/${drops[0]}/placement`, { json: { clipId, startFrame: 1 } }), 409)).toBe(LOCKED(1));
     expect(await message(await lead.request("PUT", `/api/runs/${runId}`, { json: goodRun() }), 409)).toBe(LOCKED(1));
     expect(await message(await lead.post(`/api/submissions/${submissionId}/samples`, { serial: "SO-9", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() }), 409)).toBe(LOCKED(1));
+    const clipsBefore = await db()("clips").where({ run_id: runId }).count<{ count: string }[]>("* as count");
+    expect(await message(await tech.post(`/api/runs/${runId}/clips`, { fileName: "late.mp4", size: 1000, contentType: "video/mp4" }), 409)).toBe(LOCKED(1));
+    expect(await db()("clips").where({ run_id: runId }).count<{ count: string }[]>("* as count")).toEqual(clipsBefore);
     expect(await message(await sign(demo.password), 409)).toMatch(/already signed off/);
   });
 

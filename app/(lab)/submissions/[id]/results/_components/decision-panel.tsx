@@ -5,7 +5,7 @@ import { pct } from "@/lib/results/words";
 import { DecisionBadge } from "./ball-status";
 
 /** The decision, why, what comes next, and the tolerance figures behind it. */
-export function DecisionPanel({ decision: d, edition }: Pick<ResultsView, "decision" | "edition">) {
+export function DecisionPanel({ decision: d, edition, released = false }: Pick<ResultsView, "decision" | "edition"> & { released?: boolean }) {
   const t = d.tolerance;
   return (
     <section aria-labelledby="decision-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
@@ -14,7 +14,8 @@ export function DecisionPanel({ decision: d, edition }: Pick<ResultsView, "decis
         <DecisionBadge decision={d.decision} />
       </div>
       <p className="max-w-4xl text-ink-900" data-testid="decision-explanation">{d.explanation}</p>
-      <p className="text-sm"><strong>Next:</strong> {d.nextAction}</p>
+      {/* Once signed off nothing is left to do unless a lead re-opens the results. */}
+      <p className="text-sm"><strong>Next:</strong> {released ? "Nothing: the results are signed off and released. A lead can re-open them, with a reason." : d.nextAction}</p>
       {d.belowBalls.length > 0 && (
         <Notice tone="error">
           <strong>Below the {edition.minAbsorptionS} s minimum: {d.belowBalls.join(", ")}.</strong> The manufacturer is told at once; testing goes on.

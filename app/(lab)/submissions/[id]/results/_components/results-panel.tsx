@@ -31,7 +31,7 @@ export function ResultsPanel({ id, signOff }: { id: string; signOff?: ReactNode 
       </header>
       <Downloads id={r.submission.id} />
       <Notice tone="warn"><Caution /></Notice>
-      <DecisionPanel decision={r.decision} edition={r.edition} />
+      <DecisionPanel decision={r.decision} edition={r.edition} released={r.submission.status === "released"} />
       {signOff}
       {r.surveillance && <SurveillancePanel comparison={r.surveillance} />}
       <BallTable balls={r.balls} edition={r.edition} />
