@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import { CURRENT_SUBMITTED_G } from "../readings/queries";
 import type { ReadingPair } from "./rules";
 
 /** At most this many pairs are read for one period, the most recently settled. */
@@ -10,8 +11,7 @@ const CURRENT = `
   select g.drop_id, g.slot, g.reviewer_id, u.name as reviewer_name, g.time_s, g.submitted_at
   from readings g
   join users u on u.id = g.reviewer_id
-  where g.status = 'submitted'
-    and not exists (select 1 from readings h where h.supersedes_id = g.id and h.status = 'submitted')
+  where ${CURRENT_SUBMITTED_G}
 `;
 
 /**

@@ -16,6 +16,12 @@ export interface ReadingRow extends Marks {
   submittedAt: Date | null;
 }
 
+/**
+ * SQL condition on a reading aliased g: submitted, and not replaced by a submitted correction (the
+ * same rule as lib/readings/rules.ts currentReadings). One text for every query that reads results.
+ */
+export const CURRENT_SUBMITTED_G = "g.status = 'submitted' and not exists (select 1 from readings c where c.supersedes_id = g.id and c.status = 'submitted')";
+
 const int = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
 function toReading(r: Record<string, any>): ReadingRow {

@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import { CURRENT_SUBMITTED_G } from "../readings/queries";
 
 // What the report adds to the results: each settled drop's marks and clip, and the clips' identity.
 
@@ -42,8 +43,7 @@ export async function listReportDrops(q: Db, submissionId: string, settled: read
          select json_agg(json_build_object('slot', g.slot, 'reader', u.name, 'dispenseFrame', g.dispense_frame,
                          'clearFrame', g.clear_frame, 'timeS', g.time_s) order by g.slot) as readings
            from readings g join users u on u.id = g.reviewer_id
-          where g.drop_id = d.id and g.status = 'submitted'
-            and not exists (select 1 from readings c where c.supersedes_id = g.id and c.status = 'submitted')
+          where g.drop_id = d.id and ${CURRENT_SUBMITTED_G}
        ) cur on d.state = any(?)
       where x.submission_id = ?
       order by d.run_id, d.ordinal`,

@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import { CURRENT_SUBMITTED_G } from "../readings/queries";
 
 // The settled drops of a submission, with what a result needs from their readings.
 
@@ -30,8 +31,7 @@ export async function listResultDrops(q: Db, submissionId: string): Promise<Resu
        left join lateral (
          select max(g.uncertainty_expanded_s) as uncertainty_s, array_agg(u.name order by g.slot) as readers
            from readings g join users u on u.id = g.reviewer_id
-          where g.drop_id = d.id and g.status = 'submitted'
-            and not exists (select 1 from readings c where c.supersedes_id = g.id and c.status = 'submitted')
+          where g.drop_id = d.id and ${CURRENT_SUBMITTED_G}
        ) cur on d.state = any(?)
       where x.submission_id = ?
       order by d.run_id, d.ordinal`,
