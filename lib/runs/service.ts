@@ -4,6 +4,7 @@ import { db, type Db } from "../db";
 import { findEdition } from "../editions/queries";
 import { AppError } from "../errors";
 import { findSample } from "../samples/queries";
+import { notifyBelowLimit } from "../notifications/events";
 import { assertUnlocked } from "../signoff/lock";
 import { visibleSample } from "../samples/service";
 import { assertCanEditIntake, assertLead, assertVisible } from "../submissions/policy";
@@ -61,7 +62,8 @@ export async function updateRun(actor: Actor, id: string, v: RunValues): Promise
   const run = await visibleRun(actor, id);
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
-    await assertUnlocked(trx, (await findSample(trx, run.sampleId))!.submissionId);
+    const submissionId = (await findSample(trx, run.sampleId))!.submissionId;
+    await assertUnlocked(trx, submissionId);
     const before = await viewOf(trx, (await findRun(trx, id))!);
     await updateRunRow(trx, id, toColumns(v));
     const after = await viewOf(trx, (await findRun(trx, id))!);
@@ -75,13 +77,16 @@ export async function acceptRun(actor: Actor, id: string, reason: string): Promi
   const run = await visibleRun(actor, id);
   assertLead(actor, "accept a run with flagged conditions");
   return db().transaction(async (trx) => {
-    await assertUnlocked(trx, (await findSample(trx, run.sampleId))!.submissionId);
+    const submissionId = (await findSample(trx, run.sampleId))!.submissionId;
+    await assertUnlocked(trx, submissionId);
     const before = await viewOf(trx, (await findRun(trx, id))!);
     if (before.flags.length === 0) throw new AppError("conflict", "This run's conditions raise no warning, so there is nothing to accept.");
     if (before.acceptedAt) throw new AppError("conflict", `This run was already accepted by ${before.acceptedByName}.`);
     await setAcceptance(trx, id, actor.id, reason);
     const after = await viewOf(trx, (await findRun(trx, id))!);
     await recordChange(trx, actor, { action: "run.accepted", entity: "run", entityId: id, before: { flags: before.flags }, after: { flags: after.flags, reason } });
+    // The run's ball now has a result if its drops are settled: it may be below the limit.
+    await notifyBelowLimit(trx, { runId: id, submissionId });
     return after;
   });
 }

@@ -15,6 +15,7 @@ let lead: Client;
 let a: Client;
 let b: Client;
 let makerEmail: string;
+let orgId: string;
 let submission: { id: string; reference: string };
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -34,6 +35,7 @@ beforeAll(async () => {
   // The only edition in force on 2005-07-02, so the submission received that day is judged by it.
   await newEdition(lead, { effectiveFrom: "2005-07-01", minAbsorptionS: 2.0, guardBandS: 0.3, dropsPerBall: 3, roundSizes: [2, 3], readingToleranceS: 0.5 });
   const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Below-limit maker (invented)") }), 201)).organisation;
+  orgId = org.id;
   makerEmail = (await makeUser(["manufacturer"], { organisationId: org.id })).email;
   submission = await newSubmission(lead, org.id, { receivedOn: "2005-07-02" });
 }, 60_000);
@@ -69,5 +71,21 @@ describe("a ball below the limit during testing", () => {
     expect(newest.text).not.toContain("BL-1");
     await sleep(3000);
     expect(await mailsTo(makerEmail)).toHaveLength(2);
+  }, 300_000);
+
+  it("a ball on a flagged run is reported when a lead accepts the run, not before", async () => {
+    // A submission of its own, so the first test's decision has no say in this one.
+    const other = await newSubmission(lead, orgId, { receivedOn: "2005-07-02" });
+    const sample = await newSample(lead, other.id, { serial: "BL-3" });
+    const run = await newRun(lead, sample.id, { surfaceTemp: { value: 30, unit: "C" } });
+    expect(run.needsAcceptance).toBe(true);
+    const drops = (await placeOnRun(lead, run.id, { file: plainMp4(undefined, 4) })).dropIds;
+    for (const d of drops) await readBoth(d);
+    await sleep(4000);
+    expect((await mailsTo(makerEmail)).filter((m) => m.text.includes("BL-3"))).toHaveLength(0);
+    expect((await lead.post(`/api/runs/${run.id}/acceptance`, { reason: "Surface checked again with a second probe." })).status).toBe(200);
+    const mails = await waitForMail(makerEmail, 3, 30_000);
+    expect(mails.find((m) => m.text.includes("BL-3"))!.subject).toMatch(new RegExp(`^${other.reference} `));
+    expect(mails.filter((m) => m.text.includes("ball BL-3: mean 1.0 s"))).toHaveLength(1);
   }, 300_000);
 });
