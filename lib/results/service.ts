@@ -47,9 +47,8 @@ export async function loadSubmissionResults(q: Db, s: SubmissionRow) {
 }
 
 /** A submission's ball results and staged decision; for surveillance, the comparison with its approval. Staff at any time, the manufacturer once released. */
-export async function getSubmissionResults(actor: Actor, id: string): Promise<ResultsView> {
-  const s = await visibleSubmission(actor, id);
-  const q = db();
+export async function getSubmissionResults(actor: Actor, id: string, q: Db = db()): Promise<ResultsView> {
+  const s = await visibleSubmission(actor, id, q);
   await assertReleased(actor, s, "results", q);
   const own = await loadSubmissionResults(q, s);
   let surveillance = null;

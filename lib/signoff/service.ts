@@ -52,11 +52,12 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
   if (!user || !(await verifyPassword(input.password, user.passwordHash))) {
     throw new AppError("validation", "That password is not right: the signature was not made.", { fields: { password: "That password is not right." } });
   }
-  const results = await getSubmissionResults(actor, submissionId);
-  if (results.balls.length === 0) throw new AppError("conflict", "This submission has no ball results yet, so there is nothing to sign off.");
-  if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending. ${results.decision.explanation} Results can be signed off once it is made.`);
   await db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
+    // Computed under the submission's lock, so what is signed is what the snapshot holds.
+    const results = await getSubmissionResults(actor, submissionId, trx);
+    if (results.balls.length === 0) throw new AppError("conflict", "This submission has no ball results yet, so there is nothing to sign off.");
+    if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending. ${results.decision.explanation} Results can be signed off once it is made.`);
     const s = (await findSubmission(trx, submissionId))!;
     const { signed, state, revision } = await lockState(trx, submissionId, s.reference);
     if (lockReason(state)) throw new AppError("conflict", `Submission ${s.reference} is already signed off (revision ${revision}).`);
