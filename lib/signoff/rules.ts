@@ -19,6 +19,18 @@ export function lockReason(s: LockState): string | null {
   return `Submission ${s.reference} is signed off (revision ${rev}). A lead must re-open it first.`;
 }
 
+/**
+ * Why results cannot be signed yet, from the staged decision; null when they can. Only a final
+ * decision (meets or below the limit) is signed: a pending one has nothing to sign, and one that
+ * asks for more samples would lock out the very round it asks for.
+ */
+export function signRefusal(r: { ballCount: number; decision: string; explanation: string; nextAction: string }): string | null {
+  if (r.ballCount === 0) return "This submission has no ball results yet, so there is nothing to sign off.";
+  if (r.decision === "pending") return `The decision is still pending. ${r.explanation} Results can be signed off once it is made.`;
+  if (r.decision === "close to limit — more samples") return `The decision asks for more samples: ${r.nextAction} Results can be signed off once the last round gives a final decision.`;
+  return null;
+}
+
 export interface SnapshotBall {
   sampleId: string;
   serial: string;

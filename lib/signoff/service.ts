@@ -10,7 +10,7 @@ import { findSubmission, lockSubmission, updateSubmissionRow } from "../submissi
 import { findUserById } from "../users/queries";
 import { notifyResultsReleased } from "../notifications/events";
 import { countUnsettledDrops, insertReopening, insertSignature, listReopenings, listSignatures, restoreDropStates, setDropStates } from "./queries";
-import { currentRevision, diffResults, lockReason, type ResultChanges, type Snapshot } from "./rules";
+import { currentRevision, diffResults, lockReason, signRefusal, type ResultChanges, type Snapshot } from "./rules";
 import type { ReopenInput, SignInput } from "./schema";
 
 // A lead signs a submission's results off (re-entering their password), which releases and locks
@@ -56,8 +56,8 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
     await lockSubmission(trx, submissionId);
     // Computed under the submission's lock, so what is signed is what the snapshot holds.
     const results = await getSubmissionResults(actor, submissionId, trx);
-    if (results.balls.length === 0) throw new AppError("conflict", "This submission has no ball results yet, so there is nothing to sign off.");
-    if (results.decision.decision === "pending") throw new AppError("conflict", `The decision is still pending. ${results.decision.explanation} Results can be signed off once it is made.`);
+    const refusal = signRefusal({ ballCount: results.balls.length, ...results.decision });
+    if (refusal) throw new AppError("conflict", refusal);
     const s = (await findSubmission(trx, submissionId))!;
     const { signed, state, revision } = await lockState(trx, submissionId, s.reference);
     if (lockReason(state)) throw new AppError("conflict", `Submission ${s.reference} is already signed off (revision ${revision}).`);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { currentRevision, diffResults, lockReason } from "@/lib/signoff/rules";
+import { currentRevision, diffResults, lockReason, signRefusal } from "@/lib/signoff/rules";
 
 // What a signature locks and what changed between two signed revisions (invented serials and times).
 describe("sign-off lock", () => {
@@ -27,5 +27,19 @@ describe("what changed since the previous signature", () => {
   it("is empty when nothing changed", () => {
     const same = { balls: [ball("1", 150, "meets")], decision: { decision: "meets limit" } };
     expect(diffResults(same, same)).toEqual({ balls: [], ballsAdded: [], ballsRemoved: [], decision: null });
+  });
+});
+
+// Which staged decisions a lead can sign (the product's own rule, from the design of record's staged testing).
+describe("what can be signed", () => {
+  const d = (decision: string, ballCount = 2) => signRefusal({ ballCount, decision, explanation: "Round 1 is not complete.", nextAction: "Request round 2: 8 more samples from the manufacturer." });
+  it("signs a final decision, meets or below the limit", () => {
+    expect(d("meets limit")).toBeNull();
+    expect(d("below limit")).toBeNull();
+  });
+  it("refuses with no ball results, a pending decision, or one that asks for more samples", () => {
+    expect(d("meets limit", 0)).toMatch(/no ball results yet/);
+    expect(d("pending")).toBe("The decision is still pending. Round 1 is not complete. Results can be signed off once it is made.");
+    expect(d("close to limit — more samples")).toBe("The decision asks for more samples: Request round 2: 8 more samples from the manufacturer. Results can be signed off once the last round gives a final decision.");
   });
 });
