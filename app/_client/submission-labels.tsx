@@ -1,6 +1,6 @@
-import { STATUS_LABELS, type SubmissionKind, type SubmissionStatus } from "@/lib/submissions/schema";
+import { KIND_LABELS, STATUS_LABELS, type SubmissionStatus } from "@/lib/submissions/schema";
 
-export const KIND_LABELS: Record<SubmissionKind, string> = { approval: "Approval", surveillance: "Surveillance", research: "Research" };
+export { KIND_LABELS };
 
 const STATUS_STYLE: Record<SubmissionStatus, string> = {
   received: "bg-ink-100 text-ink-800",

@@ -1,4 +1,5 @@
 import { formatTemperature } from "../units/rules";
+import { KIND_LABELS } from "../submissions/schema";
 import type { ReportData } from "./data";
 import { CAUTION, editionRows, fixed, frameRate, utc, utcShort } from "./format";
 import { box, facts, furnish, heading, newDoc, paragraph, table, toBuffer, ALERT, MUTED, type Doc } from "./pdf-layout";
@@ -34,7 +35,7 @@ function front(doc: Doc, r: ReportData): void {
     ["Laboratory", r.labName],
     ["Manufacturer", s.organisationName],
     ["Model", s.modelName],
-    ["Kind", s.kind === "surveillance" ? `surveillance${s.approvalReference ? ` (approval ${s.approvalReference})` : ""}` : "approval"],
+    ["Kind", `${KIND_LABELS[s.kind]}${s.kind === "surveillance" && s.approvalReference ? ` (approval ${s.approvalReference})` : ""}`],
     ["Reference", s.reference],
     ["Received", s.receivedOn],
     ["Specification edition", `${r.edition.name} (effective ${r.edition.effectiveFrom})`],

@@ -5,6 +5,8 @@ export const KINDS = ["approval", "surveillance", "research"] as const;
 export type SubmissionKind = (typeof KINDS)[number];
 export const STATUSES = ["received", "testing", "awaiting_samples", "decided", "released"] as const;
 export type SubmissionStatus = (typeof STATUSES)[number];
+export const KIND_LABELS: Record<SubmissionKind, string> = { approval: "Approval", surveillance: "Surveillance", research: "Research" };
+
 export const STATUS_LABELS: Record<SubmissionStatus, string> = {
   received: "received",
   testing: "testing",

@@ -71,6 +71,8 @@ describe("the lead's desk", () => {
   it("signing off while a drop is in discrepancy is refused in words, and the password stays typed", async () => {
     await page.goto(`${APP_URL}/submissions/${submissionId}/results`);
     const panel = page.getByRole("region", { name: "Sign-off" });
+    // Said before any password is typed, and refused again by the server if the lead signs anyway.
+    await panel.getByRole("status").filter({ hasText: /^Not ready to sign: The decision is still pending\./ }).waitFor();
     const password = panel.getByLabel("Your password, to sign");
     await password.fill(demo.password);
     await panel.getByRole("button", { name: "Sign off results" }).click();

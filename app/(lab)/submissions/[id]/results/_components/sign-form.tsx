@@ -2,16 +2,21 @@
 
 import { useState, type FormEvent } from "react";
 import { apiError } from "@/app/_client/form-errors";
+import { useSubmissionResults } from "@/app/_client/results";
 import { useSignResults } from "@/app/_client/signoff";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { signRefusal } from "@/lib/signoff/rules";
 
 /** The lead re-enters their password to sign; the server's refusal is shown in its own words. */
 export function SignForm({ submissionId, revision }: { submissionId: string; revision: number }) {
   const [password, setPassword] = useState("");
   const sign = useSignResults(submissionId);
   const err = apiError(sign.error);
+  // Said before the password is typed; the server checks it again when the lead signs.
+  const results = useSubmissionResults(submissionId).data;
+  const notYet = results ? signRefusal({ ballCount: results.balls.length, ...results.decision }) : null;
   const submit = (e: FormEvent) => {
     e.preventDefault();
     sign.mutate({ password }, { onSuccess: () => setPassword("") });
@@ -24,6 +29,7 @@ export function SignForm({ submissionId, revision }: { submissionId: string; rev
         to the manufacturer, who is told by e-mail. It locks this submission&apos;s readings, rulings, runs and samples until a lead re-opens it
         with a reason. It records your name and the time.
       </p>
+      {notYet && <Notice tone="warn">Not ready to sign: {notYet}</Notice>}
       <div className="max-w-sm">
         <Field id="signoff-password" type="password" autoComplete="current-password" label="Your password, to sign" value={password} onChange={(e) => setPassword(e.target.value)} error={err?.fields.password ? err.message : undefined} />
       </div>
