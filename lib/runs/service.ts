@@ -68,6 +68,8 @@ export async function updateRun(actor: Actor, id: string, v: RunValues): Promise
     await updateRunRow(trx, id, toColumns(v));
     const after = await viewOf(trx, (await findRun(trx, id))!);
     await recordChange(trx, actor, { action: "run.updated", entity: "run", entityId: id, before: snapshot(before), after: snapshot(after) });
+    // Corrected conditions can clear the run's flags, and with them give its ball a result.
+    await notifyBelowLimit(trx, { runId: id, submissionId });
     return after;
   });
 }

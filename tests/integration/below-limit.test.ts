@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/lib/db";
 import { signedIn, type Client } from "../helpers/app";
 import { demo, makeUser } from "../helpers/fixtures";
-import { newEdition, newRun, newSample, newSubmission, uniqueName } from "../helpers/intake";
+import { goodRun, newEdition, newRun, newSample, newSubmission, uniqueName } from "../helpers/intake";
 import { mailsTo, waitForMail } from "../helpers/mailbox";
 import { plainMp4 } from "../helpers/media";
 import { json, placeOnRun, read } from "../helpers/readings";
@@ -87,5 +87,19 @@ describe("a ball below the limit during testing", () => {
     const mails = await waitForMail(makerEmail, 3, 30_000);
     expect(mails.find((m) => m.text.includes("BL-3"))!.subject).toMatch(new RegExp(`^${other.reference} `));
     expect(mails.filter((m) => m.text.includes("ball BL-3: mean 1.0 s"))).toHaveLength(1);
+  }, 300_000);
+
+  it("a ball on a flagged run is reported when its conditions are corrected and the flag clears", async () => {
+    const other = await newSubmission(lead, orgId, { receivedOn: "2005-07-02" });
+    const sample = await newSample(lead, other.id, { serial: "BL-4" });
+    const run = await newRun(lead, sample.id, { surfaceTemp: { value: 30, unit: "C" } });
+    const drops = (await placeOnRun(lead, run.id, { file: plainMp4(undefined, 4) })).dropIds;
+    for (const d of drops) await readBoth(d);
+    await sleep(4000);
+    expect((await mailsTo(makerEmail)).filter((m) => m.text.includes("BL-4"))).toHaveLength(0);
+    // The surface temperature was mistyped: 22 °C, inside the edition, so no acceptance is needed.
+    expect((await lead.request("PUT", `/api/runs/${run.id}`, { json: goodRun() })).status).toBe(200);
+    const mails = await waitForMail(makerEmail, 4, 30_000);
+    expect(mails.filter((m) => m.text.includes("ball BL-4: mean 1.0 s"))).toHaveLength(1);
   }, 300_000);
 });
