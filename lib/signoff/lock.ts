@@ -1,5 +1,6 @@
 import type { Db } from "../db";
 import { AppError } from "../errors";
+import { findSubmission } from "../submissions/queries";
 import { listReopenings, listSignatures } from "./queries";
 import { currentRevision, lockReason } from "./rules";
 
@@ -10,19 +11,13 @@ import { currentRevision, lockReason } from "./rules";
 export async function assertUnlocked(q: Db, submissionId: string): Promise<void> {
   const signed = await listSignatures(q, submissionId);
   if (signed.length === 0) return;
-  const sub = await q("submissions").where({ id: submissionId }).first("reference");
+  const sub = await findSubmission(q, submissionId);
   const reason = lockReason({
     reference: sub?.reference ?? "",
     signedRevisions: signed.map((s) => s.revision),
     reopenedRevisions: (await listReopenings(q, submissionId)).map((r) => r.revision),
   });
   if (reason) throw new AppError("conflict", reason);
-}
-
-/** The submission a drop belongs to. */
-export async function submissionOfDrop(q: Db, dropId: string): Promise<string | undefined> {
-  const r = await q("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id").where("d.id", dropId).first("s.submission_id");
-  return r?.submission_id;
 }
 
 /** The revision in force and whether it is signed off, for pages that show the lock. */
