@@ -4,6 +4,7 @@ import type { Knex } from "knex";
 import { listClipsOfRun } from "../lib/clips/queries";
 import { clipSettled, ingestClipFile } from "../scripts/clips/ingest";
 import { renderSyntheticClip, type Truth } from "../scripts/clips/synth-clip";
+import { seedDemoDiscrepancy } from "./demo-discrepancy";
 
 // Demo recordings: synthetic clips whose drops take a known time (near the demo edition's 135 s
 // minimum), attached to the demo runs and processed by the real worker. Rendered once, in the
@@ -35,6 +36,7 @@ export async function seedDemoClips(knex: Knex, dataDir: string, log: (s: string
     toPlace.push([run.id, id, `${file}.truth.json`]);
   }
   for (const [runId, clipId, truthFile] of toPlace) await placeDemoDrops(knex, runId, clipId, truthFile, technician.id, log);
+  await seedDemoDiscrepancy(knex, dataDir, log);
 }
 
 /**

@@ -1,17 +1,14 @@
-import { randomUUID } from "node:crypto";
 import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import type { Knex } from "knex";
 import type { Actor } from "../lib/auth/actor";
 import { listClipsOfRun } from "../lib/clips/queries";
-import { listReadingsOfDrop } from "../lib/readings/queries";
 import { placeDrop } from "../lib/readings/drop-service";
-import { startReading, submitReading } from "../lib/readings/service";
 import { acceptRun, getRun } from "../lib/runs/service";
-import { findUserByEmail } from "../lib/users/queries";
 import { clipSettled, ingestClipFile } from "../scripts/clips/ingest";
 import { renderSyntheticClip, type Truth } from "../scripts/clips/synth-clip";
 import { parseRate } from "../scripts/clips/synth-options";
+import { actorByEmail, readOnce } from "./demo-reading-steps";
 import { clipLengthS, DEMO_BALLS, DEMO_READ_SUBMISSION, secondReaderMarks, type DemoBall, type Marks } from "./demo-results-plan";
 
 // The demo's read submission: every run of D-2026-0002 gets a synthetic recording, processed by
@@ -53,11 +50,6 @@ export async function seedDemoReadings(knex: Knex, dataDir: string, log: (s: str
   });
 }
 
-async function actorByEmail(knex: Knex, email: string): Promise<Actor> {
-  const u = await findUserByEmail(knex, email);
-  if (!u || !u.active) throw new Error(`the demo account ${email} is missing or inactive`);
-  return { id: u.id, email: u.email, name: u.name, roles: u.roles, organisationId: u.organisationId, requestId: randomUUID() };
-}
 
 interface Pending {
   ball: DemoBall;
@@ -173,14 +165,6 @@ async function settleAndRead(knex: Knex, p: Pending, dataDir: string, cast: Cast
   return submitted;
 }
 
-/** One reviewer's reading of a drop, unless they already submitted one. 1 when submitted now. */
-async function readOnce(knex: Knex, actor: Actor, dropId: string, marks: Marks): Promise<number> {
-  const mine = (await listReadingsOfDrop(knex, dropId)).filter((r) => r.reviewerId === actor.id);
-  if (mine.some((r) => r.status === "submitted")) return 0;
-  const view = await startReading(actor, dropId, marks);
-  await submitReading(actor, view.myDraft!.id);
-  return 1;
-}
 
 async function workerTiming(knex: Knex, clipId: string, timing: DemoClipTiming): Promise<void> {
   const row = await knex("clip_steps as s").join("clips as c", "c.id", "s.clip_id").where("s.clip_id", clipId).first(
