@@ -34,8 +34,15 @@ export interface AgreementStatistics {
   lowerS: number;
   upperS: number;
   multiplier: number;
-  /** ICC(A,1), absolute agreement of single readings (McGraw & Wong 1996); null with a reason when undefined. */
-  iccA1: number | null;
+  /**
+   * ICC(1,1), the one-way random-effects intraclass correlation of single readings (Shrout & Fleiss
+   * 1979, case 1): the first and second readings of a drop come from whichever reviewers took the
+   * slots, so the readers differ from drop to drop, and the one-way model is the one that fits.
+   * Null with a reason when undefined.
+   */
+  icc11: number | null;
+  /** Which form `icc11` is, as the page names it. */
+  iccForm: "ICC(1,1)";
   iccReason: string | null;
 }
 
@@ -84,15 +91,15 @@ const difference = (p: ReadingPair) => p.first.timeS - p.second.timeS;
 
 function statistics(pairs: readonly ReadingPair[]): AgreementStatistics {
   const ba = blandAltman(pairs.map((p) => p.first.timeS), pairs.map((p) => p.second.timeS), LIMITS_MULTIPLIER);
-  let iccA1: number | null = null;
+  let icc11: number | null = null;
   let iccReason: string | null = null;
   try {
-    // Rows are drops, columns the first and second reading.
-    iccA1 = intraclass(pairs.map((p) => [p.first.timeS, p.second.timeS])).single.absolute;
+    // Rows are drops, columns the first and second reading (not two fixed raters: case 1).
+    icc11 = intraclass(pairs.map((p) => [p.first.timeS, p.second.timeS])).single.oneWay;
   } catch {
     iccReason = "The intraclass correlation needs drops whose times differ from one another; every drop here has the same mean time.";
   }
-  return { biasS: ba.bias, sdS: ba.sd, lowerS: ba.lower, upperS: ba.upper, multiplier: LIMITS_MULTIPLIER, iccA1, iccReason };
+  return { biasS: ba.bias, sdS: ba.sd, lowerS: ba.lower, upperS: ba.upper, multiplier: LIMITS_MULTIPLIER, icc11, iccForm: "ICC(1,1)", iccReason };
 }
 
 /** Each reviewer's readings against the drops' agreed values, over the drops that have one. */

@@ -1,6 +1,6 @@
 import type { Db } from "../db";
 import { AppError } from "../errors";
-import type { Criterion, EditionValues } from "./schema";
+import type { BelowMinimumRule, Criterion, EditionValues } from "./schema";
 
 export interface EditionRow {
   id: string;
@@ -8,6 +8,7 @@ export interface EditionRow {
   effectiveFrom: string;
   minAbsorptionS: number;
   criterion: Criterion;
+  belowMinimumRule: BelowMinimumRule;
   dropsPerBall: number;
   guardBandS: number;
   roundSizes: number[];
@@ -32,6 +33,7 @@ function toEdition(r: Record<string, any>): EditionRow {
     effectiveFrom: r.effective_from_text,
     minAbsorptionS: r.min_absorption_s,
     criterion: r.criterion,
+    belowMinimumRule: r.below_minimum_rule,
     dropsPerBall: r.drops_per_ball,
     guardBandS: r.guard_band_s,
     roundSizes: r.round_sizes,
@@ -64,6 +66,7 @@ function toColumns(v: EditionValues) {
     effective_from: v.effectiveFrom,
     min_absorption_s: v.minAbsorptionS,
     criterion: v.criterion,
+    below_minimum_rule: v.belowMinimumRule,
     drops_per_ball: v.dropsPerBall,
     guard_band_s: v.guardBandS,
     round_sizes: v.roundSizes,

@@ -5,12 +5,20 @@ export const CRITERIA = ["ball_mean", "every_drop"] as const;
 export type Criterion = (typeof CRITERIA)[number];
 export const CRITERION_LABELS: Record<Criterion, string> = { ball_mean: "ball mean", every_drop: "every drop" };
 
+/** What a ball below the minimum does to the submission: fail it on its own, or be reported while the rounds decide. */
+export const BELOW_MINIMUM_RULES = ["fails", "reported"] as const;
+export type BelowMinimumRule = (typeof BELOW_MINIMUM_RULES)[number];
+export const BELOW_MINIMUM_RULE_LABELS: Record<BelowMinimumRule, string> = {
+  fails: "fails the submission on its own",
+  reported: "is reported; the rounds and the tolerance limit decide",
+};
+
 const probability = (label: string) => num(label).refine((v) => v > 0 && v < 1, `${label} must be between 0 and 1, e.g. 0.95.`);
 const nonNegative = (label: string) => num(label).refine((v) => v >= 0, `${label} cannot be negative.`);
 
 /** The fields of an edition whose value and source a lab sets. */
 export const EDITION_FIELDS = [
-  "minAbsorptionS", "criterion", "dropsPerBall", "guardBandS", "roundSizes", "toleranceCoverage", "toleranceConfidence",
+  "minAbsorptionS", "criterion", "belowMinimumRule", "dropsPerBall", "guardBandS", "roundSizes", "toleranceCoverage", "toleranceConfidence",
   "readingToleranceS", "minAcclimationH", "surfaceTempMinC", "surfaceTempMaxC", "roughnessMaxSdUm",
 ] as const;
 
@@ -20,6 +28,7 @@ export const editionInputSchema = z
     effectiveFrom: isoDate("Effective date"),
     minAbsorptionS: num("Minimum absorption time").refine((v) => v > 0, "Minimum absorption time must be more than zero."),
     criterion: z.enum(CRITERIA, { error: "Choose ball mean or every drop." }),
+    belowMinimumRule: z.enum(BELOW_MINIMUM_RULES, { error: "Choose whether a ball below the minimum fails the submission on its own." }).default("fails"),
     dropsPerBall: num("Drops per ball").pipe(z.number().int("Drops per ball must be a whole number.").min(1, "At least one drop per ball.").max(10, "At most 10 drops per ball.")),
     guardBandS: nonNegative("Guard band"),
     roundSizes: z

@@ -1,8 +1,11 @@
+import type { Knex } from "knex";
 import type { Db } from "../db";
 import { env } from "../env";
 import type { DropRow } from "../readings/drop-queries";
 import { SETTLED_STATES } from "../results/queries";
 import { loadSubmissionResults } from "../results/service";
+import { decimalsOf } from "../numbers";
+import { judgedThresholds, secsAgainst } from "../results/words";
 import { findSubmission } from "../submissions/queries";
 import { queueMail } from "./outbox";
 import { countUnsettledDrops, insertBelowLimitReports, listReportedBelow } from "./report-queries";
@@ -25,6 +28,17 @@ export async function notifyDiscrepancy(trx: Db, drop: DropRow, differenceS: num
  * completes its run one count is all it costs; the results are computed only when it does.
  */
 export async function notifyBelowLimit(trx: Db, drop: Pick<DropRow, "runId" | "submissionId">): Promise<string[]> {
+  // In a savepoint: whatever goes wrong in computing the results is logged and never rolls back
+  // the reading, ruling or run change that called it.
+  try {
+    return await (trx as Knex.Transaction).transaction((sp) => belowLimitMails(sp, drop));
+  } catch (err) {
+    console.error(`[notifications] the below-limit check of submission ${drop.submissionId} failed; the change stands:`, err);
+    return [];
+  }
+}
+
+async function belowLimitMails(trx: Db, drop: Pick<DropRow, "runId" | "submissionId">): Promise<string[]> {
   if ((await countUnsettledDrops(trx, drop.runId, SETTLED_STATES)) > 0) return [];
   const s = await findSubmission(trx, drop.submissionId);
   if (!s) return [];
@@ -33,7 +47,14 @@ export async function notifyBelowLimit(trx: Db, drop: Pick<DropRow, "runId" | "s
   const fresh = results.balls.filter((b) => results.decision.belowBalls.includes(b.serial) && !reported.has(b.sampleId));
   if (!fresh.length) return [];
   await insertBelowLimitReports(trx, s.id, fresh.map((b) => b.sampleId));
-  const mail = belowLimitMail({ appUrl: env().APP_URL, submissionId: s.id, reference: s.reference, modelName: s.modelName, limitS: results.limits.minAbsorptionS, balls: fresh.map((b) => ({ serial: b.serial, meanS: b.value ?? b.mean ?? 0 })) });
+  const { limits } = results;
+  const mail = belowLimitMail({
+    appUrl: env().APP_URL, submissionId: s.id, reference: s.reference, modelName: s.modelName,
+    judged: limits.criterion === "every_drop" ? "shortest drop" : "mean",
+    limit: `${limits.minAbsorptionS.toFixed(Math.max(1, decimalsOf(limits.minAbsorptionS)))} s`,
+    balls: fresh.map((b) => ({ serial: b.serial, value: secsAgainst(b.value as number, judgedThresholds(limits)) })),
+    decides: limits.belowMinimumRule === "fails",
+  });
   return queueMail(trx, await organisationRecipients(trx, s.organisationId), mail);
 }
 

@@ -35,10 +35,19 @@ export function discrepancyMail(o: { appUrl: string; dropId: string; reference: 
     { href: `${o.appUrl}/drops/${o.dropId}`, label: "Open the drop" }, o.appUrl);
 }
 
-export function belowLimitMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; balls: { serial: string; meanS: number }[]; limitS: number }): MailContent {
-  const list = o.balls.map((b) => `ball ${b.serial}: mean ${b.meanS.toFixed(1)} s`).join("; ");
+/**
+ * A ball fell below the minimum. `judged` says what the edition judges (the ball mean or its
+ * shortest drop); each value comes already written with the decimals that keep it below the limit;
+ * `decides` is the edition's rule that such a ball fails the submission on its own.
+ */
+export function belowLimitMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; judged: "mean" | "shortest drop"; balls: { serial: string; value: string }[]; limit: string; decides: boolean }): MailContent {
+  const list = o.balls.map((b) => `ball ${b.serial}: ${o.judged} ${b.value}`).join("; ");
+  const what = o.judged === "mean" ? "mean absorption time" : "shortest drop time";
+  const after = o.decides
+    ? "Under the lab's specification edition a ball below the minimum fails the submission on its own. The lab releases the results and the report once a lead has signed them off."
+    : "Testing continues; this is not the decision. The lab releases the results once a lead has signed them off.";
   return build("ball.below_limit", `${o.reference} ${o.modelName}: a ball is below the limit during testing`,
-    [`During testing of ${o.modelName} (submission ${o.reference}), the mean absorption time of ${o.balls.length === 1 ? "one ball is" : `${o.balls.length} balls are`} below the minimum of ${o.limitS.toFixed(1)} s: ${list}.`, "Testing continues; this is not the decision. The lab releases the results once a lead has signed them off."],
+    [`During testing of ${o.modelName} (submission ${o.reference}), the ${what} of ${o.balls.length === 1 ? "one ball is" : `${o.balls.length} balls are`} below the minimum of ${o.limit}: ${list}.`, after],
     { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "Open the submission in the portal" }, o.appUrl);
 }
 

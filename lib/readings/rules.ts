@@ -12,11 +12,15 @@ export type MarkProblem = { ok: false; reason: string };
 
 const seconds = (ticks: number, tb: FrameTimes["timeBase"]) => (ticks * tb.num) / tb.den;
 
-/** The display interval of a frame: until the next frame (the last frame takes its predecessor's). */
+/**
+ * The interval a mark on this frame can be wrong by. A dispense or clear frame is the first frame
+ * that shows the event, so the event happened after the frame before it was taken: between
+ * pts[f − 1] and pts[f]. Frame 0 has no frame before it and takes the interval to the next one.
+ */
 export function frameInterval(ix: FrameTimes, frame: number): number {
   const n = ix.pts.length;
   if (n < 2) return 0;
-  return frame < n - 1 ? seconds(ix.pts[frame + 1] - ix.pts[frame], ix.timeBase) : seconds(ix.pts[n - 1] - ix.pts[n - 2], ix.timeBase);
+  return frame > 0 ? seconds(ix.pts[frame] - ix.pts[frame - 1], ix.timeBase) : seconds(ix.pts[1] - ix.pts[0], ix.timeBase);
 }
 
 export interface DropTime {

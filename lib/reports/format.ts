@@ -1,9 +1,10 @@
 import type { EditionRow } from "../editions/queries";
-import { CRITERION_LABELS } from "../editions/schema";
+import { signed } from "../numbers";
+import { BELOW_MINIMUM_RULE_LABELS, CRITERION_LABELS } from "../editions/schema";
 
-// How the report and exports write numbers: fixed decimals, a dash for nothing.
+// How the report writes numbers: fixed decimals, a true minus sign, a dash for nothing.
 
-export const fixed = (v: number | null | undefined, digits: number): string => (v === null || v === undefined ? "—" : v.toFixed(digits));
+export const fixed = (v: number | null | undefined, digits: number): string => (v === null || v === undefined ? "—" : signed(v, digits));
 
 /** "2026-12-02 05:40" (UTC) from an ISO 8601 time, for columns headed "UTC". */
 export const utcShort = (iso: string | null | undefined): string => (iso ? `${iso.slice(0, 10)} ${iso.slice(11, 16)}` : "—");
@@ -27,6 +28,7 @@ export function editionRows(e: EditionRow): [string, string, string][] {
   const rows: [keyof EditionRow & string, string, string][] = [
     ["minAbsorptionS", "Minimum absorption time", `${e.minAbsorptionS} s`],
     ["criterion", "Criterion", CRITERION_LABELS[e.criterion]],
+    ["belowMinimumRule", "A ball below the minimum", BELOW_MINIMUM_RULE_LABELS[e.belowMinimumRule]],
     ["dropsPerBall", "Drops per ball", String(e.dropsPerBall)],
     ["guardBandS", "Guard band above the minimum", `${e.guardBandS} s`],
     ["roundSizes", "Round sizes (samples)", e.roundSizes.join(", ")],

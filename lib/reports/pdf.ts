@@ -1,3 +1,5 @@
+import { digitsAgainst } from "../numbers";
+import { judgedThresholds } from "../results/words";
 import { formatTemperature } from "../units/rules";
 import { KIND_LABELS } from "../submissions/schema";
 import type { ReportData } from "./data";
@@ -46,7 +48,7 @@ function front(doc: Doc, r: ReportData): void {
   const lines = r.signOff.signature ? [d.explanation] : [d.explanation, `Next: ${d.nextAction}`];
   if (d.tolerance) {
     const t = d.tolerance;
-    lines.push(`Tolerance of the judged values: n ${t.n}, mean ${fixed(t.mean, 1)} s, SD ${fixed(t.sd, 2)} s, k ${fixed(t.k, 3)}, lower limit ${fixed(t.limit, 2)} s${d.finalRound ? "" : " (it decides only once every planned round is in)"}.`);
+    lines.push(`Tolerance of the judged values: n ${t.n}, mean ${fixed(t.mean, 1)} s, SD ${fixed(t.sd, 2)} s, k ${fixed(t.k, 3)}, lower limit ${t.limit.toFixed(digitsAgainst(t.limit, [r.edition.minAbsorptionS], 2))} s${d.finalRound ? "" : " (it decides only once every planned round is in)"}.`);
   }
   box(doc, `Round ${d.round}: ${d.decision}`, lines);
 }
@@ -82,8 +84,12 @@ function samples(doc: Doc, r: ReportData): void {
 
 function balls(doc: Doc, r: ReportData): void {
   heading(doc, "Ball results");
+  // A judged value gets the decimals that keep it on its own side of the minimum and the guard band's top.
+  const every = r.edition.criterion === "every_drop";
+  const lines = judgedThresholds(r.edition);
+  const judgedFixed = (v: number | null, digits: number) => (v === null ? "—" : v.toFixed(digitsAgainst(v, lines, digits)));
   const rows = r.balls.map((b) => [
-    b.serial, String(b.round), String(b.n), fixed(b.mean, 1), fixed(b.sd, 2), fixed(b.min, 3), fixed(b.max, 3), fixed(b.range, 3), fixed(b.value, 1),
+    b.serial, String(b.round), String(b.n), every ? fixed(b.mean, 1) : judgedFixed(b.mean, 1), fixed(b.sd, 2), every ? judgedFixed(b.min, 3) : fixed(b.min, 3), fixed(b.max, 3), fixed(b.range, 3), judgedFixed(b.value, 1),
     b.status === "pending" ? `pending: ${b.pendingReason}` : STATUS_WORDS[b.status], b.dixon ? `${fixed(b.dixon.q, 3)} / ${fixed(b.dixon.critical, 3)}${b.dixon.outlierDropId ? " flagged" : ""}` : "—",
   ]);
   table(doc, [

@@ -1,10 +1,11 @@
 import { fractionBelow, lowerToleranceLimit } from "../stats";
 import type { BallResult, ResultLimits } from "./rules";
-import { ballList, everyJudged, judged, limitSecs, pct, secs, secsAgainst, sentences } from "./words";
+import { ballList, everyJudged, judged, judgedThresholds, limitSecs, pct, secs, secsAgainst, sentences } from "./words";
 
 // The staged decision on a submission. After each round: every ball clear of the guard band meets
-// the limit; a ball below the limit is reported at once while testing goes on; a ball inside the
-// guard band asks for the next round. Once every round is in, the lower tolerance limit decides.
+// the limit; a ball inside the guard band asks for the next round; once every round is in, the
+// lower tolerance limit decides. A ball below the minimum is named in every decision, in every
+// round, and fails the submission on its own unless the edition says it is only reported.
 
 export const DECISIONS = ["meets limit", "close to limit — more samples", "below limit", "pending"] as const;
 export type Decision = (typeof DECISIONS)[number];
@@ -31,11 +32,13 @@ export interface SubmissionDecision {
   round: number;
   /** Every planned round is in: the tolerance limit may decide. */
   finalRound: boolean;
-  decidedBy: "every ball clear" | "tolerance limit" | "single ball" | null;
+  decidedBy: "every ball clear" | "tolerance limit" | "single ball" | "ball below the minimum" | null;
   explanation: string;
   nextAction: string;
   nextRound: { round: number; size: number } | null;
   belowBalls: string[];
+  /** The balls below the minimum and what follows from them, in words; empty when there are none. */
+  belowNote: string;
   closeBalls: string[];
   pendingBalls: string[];
   /** Shown from two balls on; it decides only once every round is in. */
@@ -56,10 +59,14 @@ function roundsExpected(limits: ResultLimits, round: number): number {
   return limits.roundSizes.slice(0, round).reduce((a, b) => a + b, 0);
 }
 
-function belowSentence(below: BallResult[], limits: ResultLimits): string {
+/** Every ball below the minimum, with what follows: it fails the submission, testing goes on, or (last round) the tolerance limit decides. */
+function belowSentence(below: BallResult[], limits: ResultLimits, finalRound: boolean): string {
   if (below.length === 0) return "";
   const verb = below.length === 1 ? "is" : "are";
-  return `${ballList(below)} ${verb} below the ${limitSecs(limits.minAbsorptionS)} minimum: tell the manufacturer now; testing goes on.`;
+  const what = `${ballList(below, limits)} ${verb} below the ${limitSecs(limits.minAbsorptionS)} minimum`;
+  if (limits.belowMinimumRule === "fails") return `${what}: under this edition a ball below the minimum fails the submission on its own.`;
+  if (!finalRound) return `${what}: tell the manufacturer now; testing goes on.`;
+  return `${what}: the manufacturer is told; under this edition the tolerance limit of every ball decides.`;
 }
 
 export function judgeSubmission(limits: ResultLimits, balls: BallResult[], currentRound: number): SubmissionDecision {
@@ -71,13 +78,34 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
   const close = inScope.filter((b) => b.status === "close");
   const missing = Math.max(0, roundsExpected(limits, round) - inScope.length);
   const values = inScope.filter((b) => b.value !== null).map((b) => b.value as number);
-  const tolerance = toleranceJudgement(values, limits);
-  const base = { round, finalRound, tolerance, belowBalls: below.map((b) => b.serial), closeBalls: close.map((b) => b.serial), pendingBalls: pending.map((b) => b.serial) };
+  // A statistic that cannot be computed must not take the results page, the report or a reading
+  // down with it: the decision then waits for a person, and says why.
+  let tolerance: ToleranceJudgement | null = null;
+  let toleranceProblem = "";
+  try {
+    tolerance = toleranceJudgement(values, limits);
+  } catch (err) {
+    toleranceProblem = `The lower tolerance limit of ${values.length} balls could not be computed (${err instanceof Error ? err.message : String(err)}).`;
+  }
+  const warn = belowSentence(below, limits, finalRound);
+  const base = { round, finalRound, tolerance, belowBalls: below.map((b) => b.serial), belowNote: warn, closeBalls: close.map((b) => b.serial), pendingBalls: pending.map((b) => b.serial) };
   const L = limitSecs(limits.minAbsorptionS);
-  const warn = belowSentence(below, limits);
+  const waiting = [...pending.map((b) => `${b.serial} (${b.pendingReason})`), ...(missing > 0 ? [`${missing} sample${missing === 1 ? "" : "s"} of round ${round} not received`] : [])];
 
+  if (below.length > 0 && limits.belowMinimumRule === "fails") {
+    // The outcome cannot change, whatever the other balls and rounds show.
+    return {
+      ...base,
+      decision: "below limit",
+      decidedBy: "ball below the minimum",
+      explanation: sentences(`Round ${round}:`, warn, waiting.length ? `Still without a result: ${waiting.join("; ")}.` : ""),
+      nextAction: waiting.length
+        ? "Report the result to the manufacturer; finish the round's readings, then a lead reviews the results and signs them off."
+        : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
+      nextRound: null,
+    };
+  }
   if (pending.length > 0 || missing > 0) {
-    const waiting = [...pending.map((b) => `${b.serial} (${b.pendingReason})`), ...(missing > 0 ? [`${missing} sample${missing === 1 ? "" : "s"} of round ${round} not received`] : [])];
     return {
       ...base,
       decision: "pending",
@@ -95,14 +123,14 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       ...base,
       decision: "meets limit",
       decidedBy: "every ball clear",
-      explanation: `${balls_}; ${everyJudged(limits)} is at least ${secs(limits.minAbsorptionS + limits.guardBandS)}, clear of the ${L} minimum and its ${limitSecs(limits.guardBandS)} guard band (lowest: ${lowest.serial}, ${secs(lowest.value as number)}).`,
+      explanation: `${balls_}; ${everyJudged(limits)} is at least ${secs(limits.minAbsorptionS + limits.guardBandS)}, clear of the ${L} minimum and its ${limitSecs(limits.guardBandS)} guard band (lowest: ${lowest.serial}, ${secsAgainst(lowest.value as number, judgedThresholds(limits))}).`,
       nextAction: "A lead reviews the results and signs them off.",
       nextRound: null,
     };
   }
   if (!finalRound) {
     const size = limits.roundSizes[round];
-    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${limitSecs(limits.guardBandS)} guard band: ${ballList(close)}.` : "";
+    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${limitSecs(limits.guardBandS)} guard band: ${ballList(close, limits)}.` : "";
     return {
       ...base,
       decision: "close to limit — more samples",
@@ -112,13 +140,23 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       nextRound: { round: round + 1, size },
     };
   }
+  if (toleranceProblem) {
+    return {
+      ...base,
+      decision: "pending",
+      decidedBy: null,
+      explanation: sentences(`${balls_}:`, toleranceProblem, warn),
+      nextAction: "A lead judges the results by the lab's procedure; tell the Wickmark maintainers what the page says.",
+      nextRound: null,
+    };
+  }
   if (!tolerance) {
     const ok = below.length === 0;
     return {
       ...base,
       decision: ok ? "meets limit" : "below limit",
       decidedBy: "single ball",
-      explanation: `1 ball, so no tolerance limit can be computed; its ${judged(limits)} ${secs(values[0])} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
+      explanation: `1 ball, so no tolerance limit can be computed; its ${judged(limits)} ${secsAgainst(values[0], judgedThresholds(limits))} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
       nextAction: ok ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
       nextRound: null,
     };
@@ -129,7 +167,7 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
     ...base,
     decision: tolerance.passes ? "meets limit" : "below limit",
     decidedBy: "tolerance limit",
-    explanation: `${balls_}; lower ${level} tolerance limit ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`,
+    explanation: sentences(`${balls_}; lower ${level} tolerance limit ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`, warn),
     nextAction: tolerance.passes ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
     nextRound: null,
   };

@@ -12,7 +12,7 @@ export const DIXON_CONFIDENCE = 0.95;
 /** The edition's values a result is judged by. */
 export type ResultLimits = Pick<
   EditionValues,
-  "minAbsorptionS" | "criterion" | "dropsPerBall" | "guardBandS" | "roundSizes" | "toleranceCoverage" | "toleranceConfidence"
+  "minAbsorptionS" | "criterion" | "belowMinimumRule" | "dropsPerBall" | "guardBandS" | "roundSizes" | "toleranceCoverage" | "toleranceConfidence"
 >;
 
 export interface DropInput {

@@ -15,8 +15,8 @@ import { toResultsView, type ResultsView } from "./view";
 // Results are computed on every request from the settled drops: nothing to go stale.
 
 function limitsOf(e: EditionRow): ResultLimits {
-  const { minAbsorptionS, criterion, dropsPerBall, guardBandS, roundSizes, toleranceCoverage, toleranceConfidence } = e;
-  return { minAbsorptionS, criterion, dropsPerBall, guardBandS, roundSizes, toleranceCoverage, toleranceConfidence };
+  const { minAbsorptionS, criterion, belowMinimumRule, dropsPerBall, guardBandS, roundSizes, toleranceCoverage, toleranceConfidence } = e;
+  return { minAbsorptionS, criterion, belowMinimumRule, dropsPerBall, guardBandS, roundSizes, toleranceCoverage, toleranceConfidence };
 }
 
 async function ballsOf(q: Db, s: SubmissionRow, edition: EditionRow): Promise<BallInput[]> {

@@ -1,6 +1,7 @@
 import { summarize, welchInterval, type SampleSummary } from "../stats";
 import { toleranceJudgement, type Decision, type ToleranceJudgement } from "./decision";
 import type { BallResult, ResultLimits } from "./rules";
+import { signed } from "../numbers";
 import { judged, limitSecs, pct, secs, secsAgainst, sentences } from "./words";
 
 // Market samples against the approval results of the same model: the difference in means with a
@@ -45,7 +46,7 @@ export function compareWithApproval(
   const compare = !ms || !as
     ? `No ${!ms ? "market" : "approval"} ball has a result yet, so the two cannot be compared.`
     : difference
-      ? `Market samples (${ms.n} ball${ms.n === 1 ? "" : "s"}) average ${secs(ms.mean)}, ${secs(Math.abs(difference.value))} ${difference.value < 0 ? "below" : "above"} the approval's ${secs(as.mean)} (${pct(difference.confidence)} Welch interval ${difference.lower.toFixed(1)} to ${difference.upper.toFixed(1)} s).`
+      ? `Market samples (${ms.n} ball${ms.n === 1 ? "" : "s"}) average ${secs(ms.mean)}, ${secs(Math.abs(difference.value))} ${difference.value < 0 ? "below" : "above"} the approval's ${secs(as.mean)} (${pct(difference.confidence)} Welch interval ${signed(difference.lower, 1)} to ${signed(difference.upper, 1)} s).`
       : `Market samples average ${secs(ms.mean)} against the approval's ${secs(as.mean)}; an interval for the difference needs at least 2 balls on each side.`;
   const judgement = pending
     ? "The judgement waits until every market ball has a result."

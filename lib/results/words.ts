@@ -1,15 +1,22 @@
+import { digitsAgainst, signed } from "../numbers";
 import type { BallResult, ResultLimits } from "./rules";
 
-// How results are said in words: seconds to one decimal, percentages without trailing zeros.
+// How results are said in words: seconds to one decimal (more where a value would otherwise read
+// as on or across a limit), percentages without trailing zeros, a true minus sign.
 
 export function secs(v: number, digits = 1): string {
-  return `${v.toFixed(digits)} s`;
+  return `${signed(v, digits)} s`;
 }
 
-/** A value compared with a limit: one decimal, more when one would round it onto the limit. */
-export function secsAgainst(v: number, limit: number): string {
-  const digits = [1, 2].find((d) => Number(v.toFixed(d)) !== limit) ?? 3;
-  return secs(v, digits);
+/** A value compared with limits, in seconds: one decimal (or `min`), more when fewer would put it on or across a limit. */
+export function secsAgainst(v: number, thresholds: number | readonly number[], min = 1): string {
+  const list = typeof thresholds === "number" ? [thresholds] : thresholds;
+  return secs(v, digitsAgainst(v, list, min));
+}
+
+/** The limits a ball's judged value is compared with: the minimum and the top of its guard band. */
+export function judgedThresholds(limits: Pick<ResultLimits, "minAbsorptionS" | "guardBandS">): number[] {
+  return [limits.minAbsorptionS, limits.minAbsorptionS + limits.guardBandS];
 }
 
 /** An edition's value as set: 135 → "135 s", 0.3 → "0.3 s". */
@@ -35,9 +42,9 @@ export function everyJudged(limits: Pick<ResultLimits, "criterion">): string {
   return limits.criterion === "every_drop" ? "every drop time" : "every ball mean";
 }
 
-/** "HL-2003 (141.2 s), HL-2005 (143.0 s)". */
-export function ballList(balls: BallResult[]): string {
-  return balls.map((b) => `${b.serial} (${secs(b.value as number)})`).join(", ");
+/** "HL-2003 (141.2 s), HL-2005 (134.96 s)": each judged value with the decimals its status needs. */
+export function ballList(balls: BallResult[], limits: Pick<ResultLimits, "minAbsorptionS" | "guardBandS">): string {
+  return balls.map((b) => `${b.serial} (${secsAgainst(b.value as number, judgedThresholds(limits))})`).join(", ");
 }
 
 /** Joins the non-empty sentences with single spaces. */

@@ -1,3 +1,4 @@
+import { signed } from "../numbers";
 // Unit conversions for what technicians type in. Factors: NIST SP 811 (2008), Appendix B.
 // Stored precision: grams to 0.01 g, degrees Celsius to 0.01 °C.
 
@@ -40,5 +41,5 @@ export function formatWeight(grams: number): string {
 }
 
 export function formatTemperature(c: number): string {
-  return `${c.toFixed(1)} °C (${celsiusToFahrenheit(c).toFixed(1)} °F)`;
+  return `${signed(c, 1)} °C (${signed(celsiusToFahrenheit(c), 1)} °F)`;
 }

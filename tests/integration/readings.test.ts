@@ -40,9 +40,10 @@ describe("two reviewers read a drop", () => {
     expect(first.mySubmitted).toMatchObject({ dispensePts: t.dispensePts, clearPts: t.clearPts, timeS: seconds(t.clearPts - t.dispensePts) });
     expect(first.mySubmitted!.timeS).toBeCloseTo(t.frameDuration, 9); // the truth file keeps 9 decimals
     // GUM 4.3.7: each mark rectangular over its frame's interval Δ, so u = √((Δ₁² + Δ₂²)/12) (= Δ/√6 for
-    // equal intervals), and U = 2u (GUM 6.2). Intervals from the clip's own index (variable rate).
+    // equal intervals), and U = 2u (GUM 6.2). Intervals from the clip's own index (variable rate):
+    // the interval before each marked frame, since a mark is the first frame showing its event.
     const { pts } = await json<{ pts: number[] }>(await a.get(`/api/clips/${clipId}/frames`), 200);
-    const [d1, d2] = [t.dispenseFrame, t.clearFrame].map((f) => seconds(pts[f + 1] - pts[f]));
+    const [d1, d2] = [t.dispenseFrame, t.clearFrame].map((f) => seconds(pts[f] - pts[f - 1]));
     const u = first.mySubmitted!.uncertainty!;
     expect(u.standard).toBeCloseTo(Math.sqrt((d1 ** 2 + d2 ** 2) / 12), 12);
     expect(u.expanded).toBeCloseTo(2 * u.standard, 12);

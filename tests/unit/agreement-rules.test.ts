@@ -26,6 +26,23 @@ function pair(i: number, first: number, second: number, over: Partial<ReadingPai
 
 const LANCET = WRIGHT.map((w, i) => pair(i, w, MINI[i]));
 
+/** ICC(1,1) by the one-way ANOVA mean squares, written out for two readings a drop: Shrout & Fleiss (1979), case 1. */
+function icc11ByAnova(rows: [number, number][]): number {
+  const n = rows.length;
+  const k = 2;
+  const grand = rows.reduce((s, [a, b]) => s + a + b, 0) / (n * k);
+  let ssb = 0;
+  let ssw = 0;
+  for (const [a, b] of rows) {
+    const m = (a + b) / 2;
+    ssb += k * (m - grand) ** 2;
+    ssw += (a - m) ** 2 + (b - m) ** 2;
+  }
+  const bms = ssb / (n - 1);
+  const wms = ssw / (n * (k - 1));
+  return (bms - wms) / (bms + (k - 1) * wms);
+}
+
 /** ICC(A,1) by the two-way ANOVA mean squares, written out for two columns: McGraw & Wong (1996), case A. */
 function iccA1ByAnova(rows: [number, number][]): number {
   const n = rows.length;
@@ -61,15 +78,23 @@ describe("summariseAgreement", () => {
     expect(s.statistics!.multiplier).toBe(1.96);
   });
 
-  it("gives ICC(A,1) equal to the two-way ANOVA formula computed independently here", () => {
-    // No published ICC(A,1) of two columns is at hand: the check is an independent computation of
-    // McGraw & Wong (1996) case A from its mean squares (lib/stats intraclass itself is checked
-    // against Shrout & Fleiss (1979) Table 2 in stats-agreement.test.ts).
-    const expected = iccA1ByAnova(WRIGHT.map((w, i) => [w, MINI[i]]));
+  it("gives the one-way ICC(1,1), because slot 1 and slot 2 are different reviewers on different drops", () => {
+    // The first and second readings of different drops come from whichever reviewers took the
+    // slots: Shrout & Fleiss (1979) case 1, not the two-way model of the same two raters on every
+    // target (ICC(A,1)) used before. The check is an independent computation of case 1 from its
+    // one-way mean squares (lib/stats intraclass itself is checked against Shrout & Fleiss (1979)
+    // Table 2 in stats-agreement.test.ts, ICC(1,1) = 0.17 there).
+    const rows = WRIGHT.map((w, i) => [w, MINI[i]] as [number, number]);
     const s = summariseAgreement(LANCET);
-    expect(s.statistics!.iccA1).toBeCloseTo(expected, 10);
-    expect(s.statistics!.iccA1).toBeCloseTo(0.9459, 4); // (computed here) 0.9459: the meters agree closely relative to the spread between subjects
+    expect(s.statistics!.iccForm).toBe("ICC(1,1)");
+    expect(s.statistics!.icc11).toBeCloseTo(icc11ByAnova(rows), 10);
     expect(s.statistics!.iccReason).toBeNull();
+    // With the second reader 40 later on every drop the two models part (the one-way form counts the
+    // shift as disagreement within drops; the two-way form as a rater effect): it is the one-way one.
+    const shifted = rows.map(([a, b]) => [a, b + 40] as [number, number]);
+    const t = summariseAgreement(shifted.map(([a, b], i) => pair(i, a, b)));
+    expect(Math.abs(icc11ByAnova(shifted) - iccA1ByAnova(shifted))).toBeGreaterThan(1e-3);
+    expect(t.statistics!.icc11).toBeCloseTo(icc11ByAnova(shifted), 10);
   });
 
   it("plots each drop at the mean of its readings against first − second", () => {
@@ -96,7 +121,7 @@ describe("summariseAgreement", () => {
   it("gives no ICC, with a reason, when every drop has the same mean time", () => {
     const s = summariseAgreement([pair(1, 30, 31), pair(2, 31, 30)]);
     expect(s.statistics!.biasS).toBeCloseTo(0, 12);
-    expect(s.statistics!.iccA1).toBeNull();
+    expect(s.statistics!.icc11).toBeNull();
     expect(s.statistics!.iccReason).toMatch(/differ from one another/);
   });
 });

@@ -16,9 +16,21 @@ describe("dropTime", () => {
   it("uses each frame's own interval on a variable-rate clip (not frame count ÷ rate)", () => {
     const t = dropTime(vfr, 1, 4);
     expect(t.ok && t.seconds).toBeCloseTo(0.09, 12);
-    // u² = (0.030² + 0.040²)/12 (GUM 4.3.7, rectangular marks); U = 2u.
-    expect(t.ok && t.uncertainty.standard).toBeCloseTo(Math.sqrt((0.03 ** 2 + 0.04 ** 2) / 12), 15);
+    // Each mark is the first frame showing its event, so the event lies in the interval before the
+    // marked frame: 40 − 0 = 40 ms before frame 1, 130 − 120 = 10 ms before frame 4 (this pinned the
+    // interval after the frame, 30 and 40 ms, until that was found to be the wrong neighbour).
+    // u² = (0.040² + 0.010²)/12 (GUM 4.3.7, rectangular marks); U = 2u.
+    expect(t.ok && t.uncertainty.standard).toBeCloseTo(Math.sqrt((0.04 ** 2 + 0.01 ** 2) / 12), 15);
     expect(frameInterval(vfr, 5)).toBeCloseTo(0.04, 12);
+    expect(frameInterval(vfr, 0)).toBeCloseTo(0.04, 12); // frame 0: the interval to the next frame
+  });
+
+  it("takes the interval before each marked frame: marks 1 and 5 on a clip with one long frame give U = 43.0 ms", () => {
+    // pts in 1/15360: frame 5 follows a doubled interval (2048 to 3072). Intervals before the marks:
+    // 512/15360 s and 1024/15360 s; U = 2·√((Δ₁² + Δ₂²)/12) = 43.0 ms (GUM 4.3.7, arithmetic).
+    const ix = { pts: [0, 512, 1024, 1536, 2048, 3072, 3584, 4096], timeBase: { num: 1, den: 15360 } };
+    const t = dropTime(ix, 1, 5);
+    expect(t.ok && Number((t.uncertainty.expanded * 1000).toFixed(1))).toBe(43.0);
   });
 
   it("refuses marks in the wrong order or outside the clip, with the reason", () => {

@@ -1,14 +1,18 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ballResult, submissionResults, type BallInput, type ResultLimits } from "@/lib/results/rules";
+import { digitsAgainst, signed } from "@/lib/numbers";
 import { pct, secsAgainst } from "@/lib/results/words";
 import { toleranceFactor } from "@/lib/stats";
 
 // The staged decision, branch by branch, on an example edition: 135 s minimum, 10 s guard band,
 // rounds of 2, 8 and 24, 90 % coverage at 95 % confidence. Every value here is an example.
+// These use the edition rule under which a ball below the minimum is reported while the rounds and
+// the tolerance limit decide; the default rule (the ball fails the submission) has its own tests.
 const LIMITS: ResultLimits = {
   minAbsorptionS: 135,
   criterion: "ball_mean",
+  belowMinimumRule: "reported",
   dropsPerBall: 3,
   guardBandS: 10,
   roundSizes: [2, 8, 24],
@@ -83,6 +87,26 @@ describe("words", () => {
     expect(secsAgainst(134.96, 135)).toBe("134.96 s");
     expect(secsAgainst(134.996, 135)).toBe("134.996 s");
   });
+
+  it("keeps a value on its own side of every threshold given, and writes negatives with a true minus", () => {
+    expect(digitsAgainst(144.96, [135, 145])).toBe(2);
+    expect(digitsAgainst(135.04, [135, 145])).toBe(2);
+    expect(digitsAgainst(135, [135, 145])).toBe(1);
+    expect(secsAgainst(134.9999, [135, 145], 3)).toBe("134.9999 s");
+    expect(signed(-0.25, 2)).toBe("\u22120.25");
+    expect(signed(-0.0001, 2)).toBe("0.00");
+    expect(signed(1.5, 1)).toBe("1.5");
+  });
+  it("keeps any value on its side of the minimum, rounded (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 100, max: 200, noNaN: true }), fc.double({ min: 100, max: 200, noNaN: true }), (v, limit) => {
+        const L = Number(limit.toFixed(2));
+        const shown = Number(secsAgainst(v, L).replace(" s", ""));
+        expect(Math.sign(shown - L)).toBe(Math.sign(v - L));
+      }),
+      { numRuns: 300 },
+    );
+  });
 });
 
 describe("the staged submission decision", () => {
@@ -140,6 +164,41 @@ describe("the staged submission decision", () => {
     expect(decision.tolerance!.limit).toBeLessThan(135);
     expect(decision).toMatchObject({ decision: "below limit", decidedBy: "tolerance limit" });
     expect(decision.explanation).toContain("is below the 135 s minimum");
+  });
+
+  it("names a ball below the minimum in the final decision too, even when the tolerance limit holds", () => {
+    // 34 balls over rounds 2, 8 and 24, judged on every drop; one ball's shortest drop is 134.0 s.
+    const every = { ...LIMITS, criterion: "every_drop" as const };
+    const balls = Array.from({ length: 34 }, (_, i) => at(`F${i}`, i < 2 ? 1 : i < 10 ? 2 : 3, 170 + (i % 7)));
+    balls[5] = ball("LOW", 2, [134.0, 170, 171]);
+    const { decision } = submissionResults(every, balls, 3);
+    expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "tolerance limit", finalRound: true, belowBalls: ["LOW"] });
+    expect(decision.explanation).toContain("LOW (134.0 s) is below the 135 s minimum");
+    expect(decision.belowNote).toBe("LOW (134.0 s) is below the 135 s minimum: the manufacturer is told; under this edition the tolerance limit of every ball decides.");
+    expect(decision.explanation).not.toContain("testing goes on");
+    // Under the default rule the same ball fails the submission on its own.
+    const fails = submissionResults({ ...every, belowMinimumRule: "fails" }, balls, 3).decision;
+    expect(fails).toMatchObject({ decision: "below limit", decidedBy: "ball below the minimum", belowBalls: ["LOW"], nextRound: null });
+    expect(fails.explanation).toBe("Round 3: LOW (134.0 s) is below the 135 s minimum: under this edition a ball below the minimum fails the submission on its own.");
+  });
+
+  it("under the default rule a ball below the minimum fails the submission in any round, even before the others have results", () => {
+    const FAILS = { ...LIMITS, belowMinimumRule: "fails" as const };
+    const d = submissionResults(FAILS, [at("A", 1, 150), at("B", 1, 131.2)], 1).decision;
+    expect(d).toMatchObject({ decision: "below limit", decidedBy: "ball below the minimum", nextRound: null, belowBalls: ["B"] });
+    const early = submissionResults(FAILS, [at("A", 1, 131), ball("B", 1, [150, null, 150])], 1).decision;
+    expect(early).toMatchObject({ decision: "below limit", pendingBalls: ["B"] });
+    expect(early.explanation).toContain("Still without a result: B (2 of 3 drops settled).");
+    expect(early.nextAction).toContain("finish the round's readings");
+  });
+
+  it("never rounds a judged value onto or across the minimum or the guard band's top", () => {
+    const d = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 134.96)], 1).decision;
+    expect(d.explanation).toContain("B (134.96 s) is below the 135 s minimum");
+    const close = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 144.96)], 1).decision;
+    expect(close.explanation).toContain("B (144.96 s)");
+    const clear = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 145.0001)], 1).decision;
+    expect(clear.explanation).toContain("(lowest: B, 145.0001 s)");
   });
 
   it("an edition of one round of one ball is judged by that ball", () => {

@@ -4,7 +4,7 @@ import { compareWithApproval } from "@/lib/results/surveillance";
 import { summarize, welchInterval } from "@/lib/stats";
 
 // Market samples against the approval of the same model, on an example edition.
-const LIMITS: ResultLimits = { minAbsorptionS: 135, criterion: "ball_mean", dropsPerBall: 3, guardBandS: 10, roundSizes: [2, 8], toleranceCoverage: 0.9, toleranceConfidence: 0.95 };
+const LIMITS: ResultLimits = { minAbsorptionS: 135, criterion: "ball_mean", belowMinimumRule: "fails", dropsPerBall: 3, guardBandS: 10, roundSizes: [2, 8], toleranceCoverage: 0.9, toleranceConfidence: 0.95 };
 
 let seq = 0;
 const ball = (serial: string, mean: number | null): BallInput => ({

@@ -31,7 +31,7 @@ describe("special functions", () => {
   it("refuses bad input", () => {
     expect(() => normalQuantile(1)).toThrow(/between 0 and 1/);
     expect(() => studentTCdf(1, 0)).toThrow(/Degrees of freedom/);
-    expect(() => nonCentralTCdf(1, 5, 40)).toThrow(/noncentrality/);
+    expect(() => nonCentralTCdf(1, 5, Infinity)).toThrow(/needs numbers/);
   });
 });
 
@@ -55,6 +55,25 @@ describe("noncentral t CDF", () => {
           expect(nonCentralTCdf(t + dt, df, delta)).toBeGreaterThanOrEqual(nonCentralTCdf(t, df, delta) - 1e-14);
         },
       ),
+      { numRuns: 100 },
+    );
+  });
+  it("computes any noncentrality: δ = 40, 80 and 160 (beyond where a series started at j = 0 underflows)", () => {
+    // Many degrees of freedom: T′ ≈ N(δ, 1 + δ²/(2ν)) (delta method, arithmetic), so at t = δ the CDF is
+    // about ½ and one standard deviation above it about Φ(1).
+    for (const delta of [40, 80, 160]) {
+      const sd = Math.sqrt(1 + (delta * delta) / (2 * 1e6));
+      expect(nonCentralTCdf(delta + sd, 1e6, delta)).toBeCloseTo(normalCdf(1), 3);
+      expect(nonCentralTCdf(delta / 2, 50, delta)).toBeLessThan(0.01);
+      expect(nonCentralTCdf(delta * 3, 50, delta)).toBeGreaterThan(0.99);
+    }
+  });
+  it("rises with t for large noncentralities too (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 20, max: 200, noNaN: true }), fc.double({ min: 0.01, max: 20, noNaN: true }), fc.integer({ min: 10, max: 2000 }), (t, dt, df) => {
+        const delta = 37 + (t % 100);
+        expect(nonCentralTCdf(t + dt, df, delta)).toBeGreaterThanOrEqual(nonCentralTCdf(t, df, delta) - 1e-14);
+      }),
       { numRuns: 100 },
     );
   });

@@ -37,6 +37,17 @@ describe("toleranceFactor (exact, noncentral t)", () => {
     expect(Math.abs(toleranceFactor(43, 0.9, 0.99) - 1.874)).toBeLessThanOrEqual(0.0005);
   });
 
+  it("computes the factor for as many balls as a lab can have (253 balls and more at 99 % coverage)", () => {
+    // Source: values computed with SciPy 1.17, scipy.stats.nct.ppf(γ, n − 1, z_p·√n)/√n.
+    expect(toleranceFactor(300, 0.99, 0.95)).toBeCloseTo(2.5219, 4);
+    expect(toleranceFactor(1000, 0.99, 0.99)).toBeCloseTo(2.4746, 4);
+    // Either side of the old limit (δ = z_0.99·√n passes 37 at n = 253) the factor falls smoothly with n.
+    const ks = [250, 252, 253, 254, 260].map((n) => toleranceFactor(n, 0.99, 0.95));
+    ks.slice(1).forEach((k, i) => expect(k).toBeLessThan(ks[i]));
+    // For very large n the factor tends to z_p (arithmetic: s → σ and the mean → μ).
+    expect(toleranceFactor(100_000, 0.99, 0.95)).toBeCloseTo(2.3263 + 0.0137, 2);
+  });
+
   it("refuses bad input in words", () => {
     expect(() => toleranceFactor(1, 0.9, 0.95)).toThrow(/at least 2 values/);
     expect(() => toleranceFactor(10.5, 0.9, 0.95)).toThrow(/whole number/);

@@ -1,4 +1,5 @@
 import { milliseconds } from "@/app/_client/clip-words";
+import { signed } from "@/lib/numbers";
 
 /** A signed time to the millisecond, with a real minus sign: "+0.033 s", "−1.200 s". */
 export function signedMs(s: number): string {
@@ -8,4 +9,4 @@ export function signedMs(s: number): string {
 }
 
 /** A number for the chart's table, to the millisecond, minus sign included. */
-export const tableMs = (s: number) => (s < 0 ? `−${Math.abs(s).toFixed(3)}` : s.toFixed(3));
+export const tableMs = (s: number) => signed(s, 3);

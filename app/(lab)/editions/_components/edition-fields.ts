@@ -1,4 +1,4 @@
-import { CRITERION_LABELS, type EDITION_FIELDS } from "@/lib/editions/schema";
+import { BELOW_MINIMUM_RULE_LABELS, CRITERION_LABELS, type EDITION_FIELDS } from "@/lib/editions/schema";
 import type { EditionJson } from "@/app/_client/editions";
 
 export type EditionField = (typeof EDITION_FIELDS)[number];
@@ -14,6 +14,11 @@ export interface EditionFieldMeta {
 export const EDITION_VALUES: EditionFieldMeta[] = [
   { key: "minAbsorptionS", label: "Minimum absorption time", unit: "s", hint: "A ball whose result is below this does not meet the limit." },
   { key: "criterion", label: "Criterion", hint: "Judge the ball mean against the limit, or every single drop." },
+  {
+    key: "belowMinimumRule",
+    label: "A ball below the minimum",
+    hint: "Fail the submission as soon as one ball is below the minimum, or report the ball and let the rounds and the tolerance limit decide.",
+  },
   { key: "dropsPerBall", label: "Drops per ball" },
   { key: "guardBandS", label: "Guard band", unit: "s", hint: "Margin above the minimum inside which a result counts as close to the limit and asks for the next round." },
   { key: "roundSizes", label: "Round sizes", hint: "Samples asked for in each round, in order, separated by commas: for example 2, 8, 24." },
@@ -32,6 +37,7 @@ export function displayValue(e: EditionJson, key: EditionField): string {
   const meta = EDITION_VALUES.find((m) => m.key === key);
   const v = e[key];
   if (key === "criterion") return CRITERION_LABELS[e.criterion];
+  if (key === "belowMinimumRule") return BELOW_MINIMUM_RULE_LABELS[e.belowMinimumRule];
   if (Array.isArray(v)) return v.join(", ");
   return meta?.unit ? `${v} ${meta.unit}` : String(v);
 }

@@ -31,6 +31,7 @@ export function editionDefaults(from: EditionJson | undefined, mode: "new" | "ed
     effectiveFrom: mode === "edit" ? (from?.effectiveFrom ?? "") : "",
     minAbsorptionS: str(from?.minAbsorptionS),
     criterion: from?.criterion ?? "ball_mean",
+    belowMinimumRule: from?.belowMinimumRule ?? "fails",
     dropsPerBall: str(from?.dropsPerBall),
     guardBandS: str(from?.guardBandS),
     roundSizes: from?.roundSizes.join(", ") ?? "",

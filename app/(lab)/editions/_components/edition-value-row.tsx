@@ -4,7 +4,7 @@ import type { FieldErrors, UseFormRegister } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { CRITERIA, CRITERION_LABELS } from "@/lib/editions/schema";
+import { BELOW_MINIMUM_RULE_LABELS, BELOW_MINIMUM_RULES, CRITERIA, CRITERION_LABELS } from "@/lib/editions/schema";
 import { firstMessage } from "@/app/_client/form-errors";
 import { labelWithUnit, type EditionFieldMeta } from "./edition-fields";
 import type { EditionFormInput } from "./edition-form-schema";
@@ -18,6 +18,10 @@ export function EditionValueRow({ meta, register, errors }: { meta: EditionField
       {meta.key === "criterion" ? (
         <SelectField id={id} label={meta.label} hint={meta.hint} error={error} {...register("criterion")}>
           {CRITERIA.map((c) => <option key={c} value={c}>{CRITERION_LABELS[c]}</option>)}
+        </SelectField>
+      ) : meta.key === "belowMinimumRule" ? (
+        <SelectField id={id} label={meta.label} hint={meta.hint} error={error} {...register("belowMinimumRule")}>
+          {BELOW_MINIMUM_RULES.map((r) => <option key={r} value={r}>{BELOW_MINIMUM_RULE_LABELS[r]}</option>)}
         </SelectField>
       ) : (
         <Field id={id} label={labelWithUnit(meta)} hint={meta.hint} error={error} inputMode={meta.key === "roundSizes" ? "text" : "decimal"} autoComplete="off" {...register(meta.key)} />

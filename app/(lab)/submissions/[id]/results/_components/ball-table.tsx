@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { s1, s3, type BallResultView, type ResultsView } from "@/app/_client/results";
+import { s1, s3, sJudged, type BallResultView, type ResultsView } from "@/app/_client/results";
 import { BallStatus } from "./ball-status";
 
 const th = "px-3 py-2 font-semibold";
@@ -49,10 +49,10 @@ export function BallTable({ balls, edition }: Pick<ResultsView, "balls" | "editi
                 <td className={td}>{b.round}</td>
                 <td className={td}><DropTimes ball={b} /></td>
                 <td className={`${td} text-right tabular-nums`}>{b.n || "—"}</td>
-                <td className={`${td} text-right tabular-nums`}>{s1(b.mean)}</td>
+                <td className={`${td} text-right tabular-nums`}>{edition.criterion === "every_drop" ? s1(b.mean) : sJudged(b.mean, edition)}</td>
                 <td className={`${td} text-right tabular-nums`}>{b.sd === null ? "—" : `${b.sd.toFixed(2)} s`}</td>
                 <td className={`${td} text-right tabular-nums`}>{s1(b.range)}</td>
-                {edition.criterion === "every_drop" && <td className={`${td} text-right tabular-nums`}>{s1(b.value)}</td>}
+                {edition.criterion === "every_drop" && <td className={`${td} text-right tabular-nums`}>{sJudged(b.value, edition)}</td>}
                 <td className={td}>
                   <BallStatus status={b.status} />
                   {b.pendingReason && <span className="mt-1 block text-xs text-ink-600">{b.pendingReason}</span>}

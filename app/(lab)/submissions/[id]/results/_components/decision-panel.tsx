@@ -1,7 +1,7 @@
 import { s1, type ResultsView } from "@/app/_client/results";
 import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
-import { pct } from "@/lib/results/words";
+import { pct, secsAgainst } from "@/lib/results/words";
 import { DecisionBadge } from "./ball-status";
 
 /** The decision, why, what comes next, and the tolerance figures behind it. */
@@ -18,7 +18,7 @@ export function DecisionPanel({ decision: d, edition, released = false }: Pick<R
       <p className="text-sm"><strong>Next:</strong> {released ? "Nothing: the results are signed off and released. A lead can re-open them, with a reason." : d.nextAction}</p>
       {d.belowBalls.length > 0 && (
         <Notice tone="error">
-          <strong>Below the {edition.minAbsorptionS} s minimum: {d.belowBalls.join(", ")}.</strong> The manufacturer is told at once; testing goes on.
+          <strong>Below the {edition.minAbsorptionS} s minimum:</strong> {d.belowNote}
         </Notice>
       )}
       {t && (
@@ -33,7 +33,7 @@ export function DecisionPanel({ decision: d, edition, released = false }: Pick<R
               { label: "Mean of ball values", value: s1(t.mean) },
               { label: "Standard deviation", value: `${t.sd.toFixed(2)} s` },
               { label: `k (${pct(t.coverage)} coverage, ${pct(t.confidence)} confidence)`, value: t.k.toFixed(3) },
-              { label: "Lower tolerance limit", value: `${t.limit.toFixed(2)} s` },
+              { label: "Lower tolerance limit", value: secsAgainst(t.limit, edition.minAbsorptionS, 2) },
               { label: "Estimated fraction below the minimum", value: pct(t.fractionBelow, 2) },
               { label: "Cpl", value: t.cpl === null ? "—" : t.cpl.toFixed(2) },
             ]}

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { s1, type ResultsView } from "@/app/_client/results";
 import { DetailList } from "@/components/ui/detail-list";
+import { signed } from "@/lib/numbers";
 import { DecisionBadge } from "./ball-status";
 
 type Comparison = NonNullable<ResultsView["surveillance"]>;
@@ -24,7 +25,7 @@ export function SurveillancePanel({ comparison: c }: { comparison: Comparison })
           { label: "Market balls", value: summary(c.market.summary) },
           {
             label: "Difference, market − approval",
-            value: c.difference ? `${c.difference.value.toFixed(2)} s (${Math.round(c.difference.confidence * 100)} % Welch interval ${c.difference.lower.toFixed(2)} to ${c.difference.upper.toFixed(2)} s, ${c.difference.df.toFixed(1)} df)` : "needs 2 balls on each side",
+            value: c.difference ? `${signed(c.difference.value, 2)} s (${Math.round(c.difference.confidence * 100)} % Welch interval ${signed(c.difference.lower, 2)} to ${signed(c.difference.upper, 2)} s, ${c.difference.df.toFixed(1)} df)` : "needs 2 balls on each side",
           },
         ]}
       />

@@ -2,7 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { Downloads } from "@/app/_client/report-downloads";
-import { s1, useSubmissionResults } from "@/app/_client/results";
+import { s1, sJudged, useSubmissionResults } from "@/app/_client/results";
 import { Caution } from "@/components/shell/caution";
 import { DetailList } from "@/components/ui/detail-list";
 import { LocalTime } from "@/components/ui/local-time";
@@ -53,9 +53,9 @@ function Released({ id, release }: { id: string; release: ReleaseView }) {
                 <th scope="row" className="px-3 py-2 font-semibold">{b.serial}</th>
                 <td className="px-3 py-2">{b.round}</td>
                 <td className="px-3 py-2">{b.n}</td>
-                <td className="px-3 py-2 tabular-nums">{s1(b.mean)}</td>
+                <td className="px-3 py-2 tabular-nums">{edition.criterion === "every_drop" ? s1(b.mean) : sJudged(b.mean, edition)}</td>
                 <td className="px-3 py-2 tabular-nums">{b.sd === null ? "—" : `${b.sd.toFixed(2)} s`}</td>
-                <td className="px-3 py-2 tabular-nums">{b.min === null ? "—" : `${b.min.toFixed(3)} s`}</td>
+                <td className="px-3 py-2 tabular-nums">{edition.criterion === "every_drop" ? sJudged(b.min, edition, 3) : b.min === null ? "—" : `${b.min.toFixed(3)} s`}</td>
                 <td className="px-3 py-2">{BALL_WORDS[b.status]}</td>
               </tr>
             ))}
