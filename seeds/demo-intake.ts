@@ -7,6 +7,7 @@ export const DEMO_EDITION = {
   effective_from: "2026-01-01",
   min_absorption_s: 135,
   criterion: "ball_mean",
+  below_minimum_rule: "fails",
   drops_per_ball: 3,
   guard_band_s: 10,
   round_sizes: [2, 8, 24],
@@ -20,6 +21,7 @@ export const DEMO_EDITION = {
   sources: {
     minAbsorptionS: "135 s (2 min 15 s) is a widely used minimum, quoted from memory; confirm it against the governing specification.",
     criterion: "Invented for the demo.",
+    belowMinimumRule: "An example: whether one ball below the minimum fails the model on its own is the governing specification's to say.",
     dropsPerBall: "Three drops per ball is common practice.",
     guardBandS: "Invented for the demo.",
     roundSizes: "2, then 8 more, then 24 more is common practice for results close to the limit.",

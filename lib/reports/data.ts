@@ -38,6 +38,8 @@ export interface ReportDrop {
   state: string;
   testedAt: string;
   clipSha256: string | null;
+  /** The time base of the recording it was read on: the resolution of its times. */
+  timeBase: { num: number; den: number } | null;
   readings: ReportReading[];
   timeS: number | null;
   uncertaintyS: number | null;
@@ -76,13 +78,14 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
     return { id: x.id, serial: x.serial, round: x.round, weightG: x.weightG, weightLb: x.weightG / GRAMS_PER_POUND, receivedAt: x.receivedAt.toISOString(), run: run ? toRunView(run, x, edition) : null };
   });
   const sha = new Map(clips.map((c) => [c.id, c.sha256]));
+  const timeBase = new Map(clips.map((c) => [c.id, c.timeBase]));
   const drops: ReportDrop[] = balls.flatMap((b) => {
     const sample = reportSamples.find((x) => x.id === b.sampleId)!;
     return b.drops.map((d) => {
       const m = marks.find((x) => x.id === d.id);
       return {
         id: d.id, runId: b.runId!, serial: b.serial, round: b.round, ordinal: d.ordinal, state: m?.state ?? "unread",
-        testedAt: sample.run?.testedAt ?? "", clipSha256: m?.clipId ? (sha.get(m.clipId) ?? null) : null,
+        testedAt: sample.run?.testedAt ?? "", clipSha256: m?.clipId ? (sha.get(m.clipId) ?? null) : null, timeBase: m?.clipId ? (timeBase.get(m.clipId) ?? null) : null,
         readings: m?.readings ?? [], timeS: d.timeS, uncertaintyS: d.uncertaintyS, outlier: d.outlier,
       };
     });

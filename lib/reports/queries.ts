@@ -29,6 +29,8 @@ export interface ReportClipRow {
   frameCount: number | null;
   rate: string | null;
   averageRate: number | null;
+  /** Seconds per tick of the clip's frame timestamps, as num/den; null before it is indexed. */
+  timeBase: { num: number; den: number } | null;
 }
 
 /** Marks of settled drops only, so nothing of a drop still being read blind leaves this query. */
@@ -61,7 +63,7 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     .where("x.submission_id", submissionId)
     .where("c.status", "ready")
     .orderBy([{ column: "x.round" }, { column: "x.serial" }, { column: "c.created_at" }])
-    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "f.frame_count", "f.nominal_rate", "f.average_rate");
+    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "f.frame_count", "f.nominal_rate", "f.average_rate", "f.time_base_num", "f.time_base_den");
   return rows.map((r) => ({
     id: r.id,
     runId: r.run_id,
@@ -70,5 +72,6 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     frameCount: r.frame_count,
     rate: r.nominal_rate,
     averageRate: r.average_rate,
+    timeBase: r.time_base_num ? { num: r.time_base_num, den: r.time_base_den } : null,
   }));
 }

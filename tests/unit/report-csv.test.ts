@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { BALL_COLUMNS, ballsCsv, csv, FORMULA_LIKE } from "@/lib/reports/csv";
+import { BALL_COLUMNS, ballsCsv, csv, dropsCsv, FORMULA_LIKE, timeDecimals } from "@/lib/reports/csv";
 import type { ReportData } from "@/lib/reports/data";
 import { frameRate } from "@/lib/reports/format";
 import { changeLines } from "@/lib/reports/sign-off";
@@ -12,7 +12,37 @@ const ball = (over: Partial<BallResult>): BallResult => ({
   sampleId: "s1", serial: "A-1", round: 1, weightG: 6800, runId: "r1", drops: [], n: 3, mean: 140.5, sd: 1.25, min: 139, max: 142,
   range: 3, value: 140.5, status: "meets", pendingReason: null, dixon: null, ...over,
 });
-const data = (balls: BallResult[]) => ({ submission: { reference: "D-2026-0009" }, balls } as unknown as ReportData);
+const EDITION = { criterion: "ball_mean", minAbsorptionS: 135, guardBandS: 10 };
+const data = (balls: BallResult[], edition: object = EDITION) => ({ submission: { reference: "D-2026-0009" }, edition, balls } as unknown as ReportData);
+
+describe("numbers at the precision their measurement supports", () => {
+  it("writes statistics to the millisecond, without float noise, and still as numbers", () => {
+    const row = ballsCsv(data([ball({ mean: 140.659999999999997, sd: 1.2345678, min: 139.0000000001, max: 142.1, range: 3.0999999999999943, value: 140.659999999999997 })])).split("\r\n")[1];
+    expect(row).toBe("D-2026-0009,A-1,1,6800,3,140.66,1.235,139,142.1,3.1,140.66,meets,,,");
+  });
+
+  it("keeps a judged value on its side of the minimum: 134.9996 is not written as 135", () => {
+    const row = ballsCsv(data([ball({ mean: 134.9996, value: 134.9996, status: "below" })])).split("\r\n")[1];
+    expect(row).toContain(",134.9996,");
+    expect(row).not.toContain(",135,");
+    // Judged on every drop, the shortest drop is the judged one.
+    const every = ballsCsv(data([ball({ mean: 140, min: 144.99995, value: 144.99995, status: "close" })], { ...EDITION, criterion: "every_drop" })).split("\r\n")[1];
+    expect(every).toBe("D-2026-0009,A-1,1,6800,3,140,1.25,144.99995,142,3,144.99995,close,,,");
+  });
+
+  it("writes drop times to half a tick of the recording's time base", () => {
+    expect(timeDecimals({ num: 1, den: 90000 })).toBe(6);
+    expect(timeDecimals({ num: 1, den: 25 })).toBe(2);
+    expect(timeDecimals({ num: 1001, den: 30000 })).toBe(2);
+    const drop = {
+      id: "d1", runId: "r1", serial: "A-1", round: 1, ordinal: 1, state: "agreed", testedAt: "2026-12-01T10:00:00.000Z", clipSha256: "ab", timeBase: { num: 1, den: 90000 },
+      readings: [{ slot: 1, reader: "A", dispenseFrame: 3, clearFrame: 99, timeS: 4.659999999999997 }, { slot: 2, reader: "B", dispenseFrame: 3, clearFrame: 100, timeS: 4.6933333333333 }],
+      timeS: 4.676666666666665, uncertaintyS: 0.027216552697590868, outlier: false,
+    };
+    const row = dropsCsv({ ...data([]), drops: [drop] } as unknown as ReportData).split("\r\n")[1];
+    expect(row).toBe("D-2026-0009,A-1,1,r1,2026-12-01T10:00:00.000Z,1,agreed,A,B,3,99,3,100,4.66,4.693333,0.0272,4.676667,ab");
+  });
+});
 
 describe("balls.csv", () => {
   it("quotes a serial with a comma and a quote, and a reader of the file gets it back unchanged", () => {

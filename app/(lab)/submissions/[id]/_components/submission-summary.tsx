@@ -38,7 +38,7 @@ export function SubmissionSummary({ submission: s, edition, signOff }: Pick<Staf
       )}
       <DetailList items={items} />
       <p className="text-sm text-ink-600">
-        Judged against {edition.name}: {edition.dropsPerBall} drops per ball, at least {edition.minAbsorptionS} s absorption time.
+        Judged against {edition.name}: {edition.dropsPerBall} {edition.dropsPerBall === 1 ? "drop" : "drops"} per ball, at least {edition.minAbsorptionS} s absorption time.
       </p>
       {s.notes && <p className="whitespace-pre-wrap text-sm text-ink-800">{s.notes}</p>}
     </header>

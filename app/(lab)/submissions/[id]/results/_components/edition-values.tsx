@@ -1,12 +1,13 @@
 import Link from "next/link";
 import type { ResultsView } from "@/app/_client/results";
-import { CRITERION_LABELS } from "@/lib/editions/schema";
+import { BELOW_MINIMUM_RULE_LABELS, CRITERION_LABELS } from "@/lib/editions/schema";
 
 /** The edition's values these results were judged by, each with where it comes from. */
 export function EditionValues({ edition: e }: Pick<ResultsView, "edition">) {
   const rows: [string, string, keyof typeof e.sources | string][] = [
     ["Minimum absorption time", `${e.minAbsorptionS} s`, "minAbsorptionS"],
     ["Criterion", CRITERION_LABELS[e.criterion], "criterion"],
+    ["A ball below the minimum", BELOW_MINIMUM_RULE_LABELS[e.belowMinimumRule], "belowMinimumRule"],
     ["Guard band", `${e.guardBandS} s above the minimum`, "guardBandS"],
     ["Rounds", e.roundSizes.join(", then "), "roundSizes"],
     ["Tolerance coverage and confidence", `${e.toleranceCoverage * 100} % / ${e.toleranceConfidence * 100} %`, "toleranceCoverage"],
