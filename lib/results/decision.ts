@@ -156,7 +156,7 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       ...base,
       decision: ok ? "meets limit" : "below limit",
       decidedBy: "single ball",
-      explanation: `1 ball, so no tolerance limit can be computed; its ${judged(limits)} ${secsAgainst(values[0], judgedThresholds(limits))} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
+      explanation: `1 ball (${inScope[0].serial}), so no tolerance limit can be computed; its ${judged(limits)} ${secsAgainst(values[0], judgedThresholds(limits))} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
       nextAction: ok ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
       nextRound: null,
     };

@@ -85,6 +85,7 @@ export async function getSubmission(actor: Actor, id: string): Promise<StaffSubm
       name: edition.name,
       dropsPerBall: edition.dropsPerBall,
       minAbsorptionS: edition.minAbsorptionS,
+      belowMinimumRule: edition.belowMinimumRule,
       minAcclimationH: edition.minAcclimationH,
       surfaceTempMinC: edition.surfaceTempMinC,
       surfaceTempMaxC: edition.surfaceTempMaxC,

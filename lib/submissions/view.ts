@@ -1,3 +1,4 @@
+import type { BelowMinimumRule } from "../editions/schema";
 import type { RunView } from "../runs/view";
 import type { SampleView } from "../samples/view";
 import type { SubmissionRow } from "./queries";
@@ -42,7 +43,7 @@ export function toManufacturerView(s: SubmissionRow, samples: { round: number }[
 export interface StaffSubmissionDetail {
   view: "staff";
   submission: SubmissionView;
-  edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number; minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
+  edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number; belowMinimumRule: BelowMinimumRule; minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
   rounds: { round: number; samples: (SampleView & { runs: RunView[] })[] }[];
   flaggedRuns: number;
   /** The revision in force and whether a lead has signed it off (which locks the submission). */

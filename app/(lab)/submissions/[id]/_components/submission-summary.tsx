@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { formatDay } from "@/components/ui/dates";
 import { DetailList } from "@/components/ui/detail-list";
+import { editionInBrief } from "@/lib/editions/words";
 import type { StaffSubmissionDetail } from "@/lib/submissions/view";
 import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
 
@@ -38,7 +39,7 @@ export function SubmissionSummary({ submission: s, edition, signOff }: Pick<Staf
       )}
       <DetailList items={items} />
       <p className="text-sm text-ink-600">
-        Judged against {edition.name}: {edition.dropsPerBall} {edition.dropsPerBall === 1 ? "drop" : "drops"} per ball, at least {edition.minAbsorptionS} s absorption time.
+        Judged against {editionInBrief(edition)}
       </p>
       {s.notes && <p className="whitespace-pre-wrap text-sm text-ink-800">{s.notes}</p>}
     </header>
