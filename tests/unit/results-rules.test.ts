@@ -201,6 +201,22 @@ describe("the staged submission decision", () => {
     expect(clear.explanation).toContain("(lowest: B, 145.0001 s)");
   });
 
+  it("a tolerance limit that cannot be computed leaves the decision pending, in words, and never throws", () => {
+    // A coverage of 1 has no normal quantile: the statistic fails, the results still come.
+    const broken = { ...TWO_ROUNDS, toleranceCoverage: 1 };
+    const { decision } = submissionResults(broken, tenBalls([141, 142, 143, 145, 146, 146, 147, 149, 150, 151]), 2);
+    expect(decision).toMatchObject({ decision: "pending", tolerance: null });
+    expect(decision.explanation).toMatch(/^10 balls: The lower tolerance limit of 10 balls could not be computed \(.+\)\.$/);
+  });
+
+  it("judges 300 balls at 99 % coverage (a factor beyond where the old series stopped)", () => {
+    const many = { ...LIMITS, roundSizes: [2, 298], toleranceCoverage: 0.99 };
+    const balls = Array.from({ length: 300 }, (_, i) => at(`M${i}`, i < 2 ? 1 : 2, 150 + (i % 10)));
+    const { decision } = submissionResults(many, balls, 2);
+    expect(decision.tolerance!.k).toBeCloseTo(2.5219, 4); // SciPy 1.17 scipy.stats.nct (see stats-tolerance.test.ts)
+    expect(decision.decision).toBe("meets limit");
+  });
+
   it("an edition of one round of one ball is judged by that ball", () => {
     const one = { ...LIMITS, roundSizes: [1] };
     expect(submissionResults(one, [at("A", 1, 140)], 1).decision).toMatchObject({ decision: "meets limit", decidedBy: "single ball" });
