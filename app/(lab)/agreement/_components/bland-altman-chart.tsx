@@ -25,7 +25,7 @@ export function BlandAltmanChart({ report }: { report: AgreementReport }) {
   return (
     <ChartFigure
       title="Differences between the two readings"
-      description={`${points.length} drops: each point is one drop, at the mean of its two readings (across) and the first reading minus the second (up).${s ? ` The solid line is the bias, the dashed lines the limits of agreement (bias ± ${s.multiplier} sd).` : ""}`}
+      description={`${points.length} ${points.length === 1 ? "drop" : "drops"}: each point is one drop, at the mean of its two readings (across) and the first reading minus the second (up).${s ? ` The solid line is the bias, the dashed lines the limits of agreement (bias ± ${s.multiplier} sd).` : ""}`}
       table={{
         caption: "Each drop's mean of the two readings and first − second, in seconds",
         columns: ["Drop", "Mean of the two readings (s)", "First − second (s)"],
