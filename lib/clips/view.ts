@@ -1,6 +1,7 @@
 import type { FrameIndexRow, RenditionRow } from "./index-queries";
 import type { ClipRow, StepRow } from "./queries";
 import { STEP_LABELS, STEPS, type ClipStatus, type Step } from "./rules";
+import { trimKept, type TrimKept } from "./trim-provenance";
 
 export interface ClipView {
   id: string;
@@ -22,6 +23,8 @@ export interface ClipView {
   posterUrl: string | null;
   filmstrip: { url: string; tiles: number } | null;
   proxyReason: string | null;
+  /** Set when the clip was trimmed in the browser: the window asked for and the frames really kept. */
+  trim: TrimKept | null;
 }
 
 export function toClipView(
@@ -59,5 +62,6 @@ export function toClipView(
     posterUrl: urls.poster,
     filmstrip: urls.filmstrip && rendition?.filmstripTiles ? { url: urls.filmstrip, tiles: rendition.filmstripTiles } : null,
     proxyReason: rendition?.proxyReason || null,
+    trim: c.trim ? trimKept(c.trim, index) : null,
   };
 }

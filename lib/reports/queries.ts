@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import { trimKept } from "../clips/trim-provenance";
 import { CURRENT_SUBMITTED_G } from "../readings/queries";
 
 // What the report adds to the results: each settled drop's marks and clip, and the clips' identity.
@@ -29,6 +30,8 @@ export interface ReportClipRow {
   frameCount: number | null;
   rate: string | null;
   averageRate: number | null;
+  /** For a clip trimmed in the browser: the window asked for and the frames really kept, in words. */
+  trimNote: string | null;
 }
 
 /** Marks of settled drops only, so nothing of a drop still being read blind leaves this query. */
@@ -61,7 +64,7 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     .where("x.submission_id", submissionId)
     .where("c.status", "ready")
     .orderBy([{ column: "x.round" }, { column: "x.serial" }, { column: "c.created_at" }])
-    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "f.frame_count", "f.nominal_rate", "f.average_rate");
+    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "c.trim", "f.frame_count", "f.nominal_rate", "f.average_rate", "f.first_pts", "f.last_pts", "f.time_base_num", "f.time_base_den");
   return rows.map((r) => ({
     id: r.id,
     runId: r.run_id,
@@ -70,5 +73,8 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     frameCount: r.frame_count,
     rate: r.nominal_rate,
     averageRate: r.average_rate,
+    trimNote: r.trim
+      ? trimKept(r.trim, r.frame_count ? { firstPts: Number(r.first_pts), lastPts: Number(r.last_pts), timeBase: { num: r.time_base_num, den: r.time_base_den } } : null).note
+      : null,
   }));
 }

@@ -163,7 +163,8 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     await panel.getByRole("button", { name: "Trim and upload" }).click();
 
     const trimmed = recordings.getByRole("article", { name: new RegExp(trimmedName.replace(/\./g, "\\.")) });
-    await trimmed.getByText(`Trimmed in the browser from ${name}: 3 s to 6 s`, { exact: false }).waitFor({ timeout: 60_000 });
+    // The note says what was asked; the clip's page says what was really kept (checked below).
+    await trimmed.getByText(`Trimmed in the browser from ${name}: asked for 3 s to 6 s.`, { exact: false }).waitFor({ timeout: 60_000 });
     await trimmed.getByText("Stored in full.").waitFor({ timeout: 30_000 });
     await screenshot(page, "clips-trimmed-uploaded");
     const clip = await waitForClip(lead, (await clipNamed(trimmedName)).id);
@@ -178,5 +179,10 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     codes.forEach((c, i) => expect(c, `frame ${i} of the trimmed clip`).toBe(75 + i));
     expect(Math.abs(codes[codes.length - 1] - 150)).toBeLessThanOrEqual(1);
     expect(clip.index?.frameCount).toBe(codes.length);
+    // Kept frames in the original's seconds (the trim keeps the original's timestamps).
+    expect(clip.trim).toMatchObject({ sourceName: name, requestedStartS: 3, requestedEndS: 6, keptFirstS: codes[0] / 25, keptLastS: codes[codes.length - 1] / 25 });
+    await page.goto(`${APP_URL}/clips/${clip.id}`);
+    await page.getByText(clip.trim!.note).waitFor();
+    await screenshot(page, "clips-trimmed-provenance");
   });
 });
