@@ -25,7 +25,7 @@ export const envSchema = z.object({
   CLIP_MAX_BYTES: z.coerce.number().int().positive().default(8 * 1024 ** 3),
   CLIP_PART_SIZE_MB: z.coerce.number().int().min(5).max(512).default(16),
   // ffprobe's format names (a file is judged by probing it, never by its extension).
-  CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts"),
+  CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts,mpeg"),
   CLIP_JOB_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(2 * 3600),
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(60),
   // The lab named in the header of every test report.

@@ -1,9 +1,11 @@
 // A clip's frame index and proxy decision said in words. Pure.
 import type { ClipView } from "@/lib/clips/view";
+import { codecName } from "@/lib/clips/media-names";
+
+export { containerName } from "@/lib/clips/media-names";
 
 type Index = NonNullable<ClipView["index"]>;
 
-const CODECS: Record<string, string> = { h264: "H.264", hevc: "H.265 (HEVC)", vp8: "VP8", vp9: "VP9", av1: "AV1", mpeg4: "MPEG-4 Part 2", mjpeg: "Motion JPEG", prores: "ProRes" };
 
 /** 1800 → "1 800": groups of three with a narrow no-break space (SI style), so a number never wraps. */
 export function groupDigits(n: number): string {
@@ -43,7 +45,7 @@ export function describeIndex(ix: Index): string {
     ix.variableRate ? `variable rate${n ? ` (nominal ${rate(n)} fps)` : ""}` : "constant rate",
     `first timestamp ${seconds(ptsSeconds(ix.firstPts, ix.timeBase))}`,
     `${ix.width}×${ix.height}${ix.rotation ? ` rotated ${ix.rotation}°` : ""}`,
-    CODECS[ix.codec] ?? ix.codec,
+    codecName(ix.codec),
     `B-frames: ${ix.hasBFrames ? "yes" : "no"}`,
   ];
   return parts.join(", ");
@@ -65,14 +67,4 @@ export function proxyDecision(c: Pick<ClipView, "proxyReason" | "playback" | "st
   }
   if (step?.state === "failed") return step.reason ?? "The stepping proxy could not be made.";
   return null;
-}
-
-/** ffprobe's format name ("mov,mp4,m4a,3gp,3g2,mj2") as people call the container. */
-export function containerName(format: string): string {
-  const f = format.split(",");
-  if (f.includes("mp4") || f.includes("mov")) return "MP4 / QuickTime";
-  if (f.includes("matroska") || f.includes("webm")) return "Matroska / WebM";
-  if (f.includes("mpegts")) return "MPEG transport stream";
-  if (f.includes("avi")) return "AVI";
-  return format;
 }

@@ -28,3 +28,24 @@ export function proxyMismatch(index: { pts: readonly number[]; timeBase: Rationa
 export function proxyGop(averageRate: number): number {
   return Math.max(1, Math.min(30, Math.round(averageRate / 2)));
 }
+
+/**
+ * A proxy whose frames do not match the original's frame index, in words for the technician: what
+ * is wrong with the recording, and what to do. The clip cannot be read without a proxy.
+ */
+export function proxyRefusal(problem: string): string {
+  return (
+    `The recording could not be made steppable: re-encoded, its frames do not keep the times the file gives them (${problem}). ` +
+    "The file's timestamps are probably damaged, for example by a cut or a join made without re-encoding outside Wickmark. " +
+    "Upload the recording as the recorder exported it (use Trim first here to shorten it), or export it again from the recorder."
+  );
+}
+
+/** ffmpeg could not decode the recording to make the proxy (not a network failure). */
+export function proxyBuildFailure(toolMessage: string): string {
+  const said = toolMessage.replace(/^ffmpeg could not build the proxy:\s*/, "").slice(0, 200);
+  return (
+    `The recording could not be made steppable: decoding it failed (ffmpeg said: ${said}). ` +
+    "The file is probably damaged or incomplete. Export it again from the recorder and upload the new file."
+  );
+}

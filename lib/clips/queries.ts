@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import type { TrimSource } from "./schema";
 import type { ProbeSummary } from "./verify-rules";
 import type { ClipStatus, Step } from "./rules";
 
@@ -15,6 +16,7 @@ export interface ClipRow {
   sha256: string | null;
   duplicateOf: string | null;
   probe: ProbeSummary | null;
+  trim: TrimSource | null;
   uploadedBy: string;
   createdAt: Date;
   uploadedAt: Date | null;
@@ -47,6 +49,7 @@ function toClip(r: Record<string, any>): ClipRow {
     sha256: r.sha256,
     duplicateOf: r.duplicate_of,
     probe: r.probe,
+    trim: r.trim ?? null,
     uploadedBy: r.uploaded_by,
     createdAt: r.created_at,
     uploadedAt: r.uploaded_at,
@@ -54,8 +57,11 @@ function toClip(r: Record<string, any>): ClipRow {
   };
 }
 
-export async function insertClip(q: Db, c: { id: string; runId: string; originalName: string; declaredType: string; declaredSize: number; objectKey: string; uploadedBy: string }): Promise<void> {
-  await q("clips").insert({ id: c.id, run_id: c.runId, original_name: c.originalName, declared_type: c.declaredType, declared_size: c.declaredSize, object_key: c.objectKey, uploaded_by: c.uploadedBy });
+export async function insertClip(q: Db, c: { id: string; runId: string; originalName: string; declaredType: string; declaredSize: number; objectKey: string; uploadedBy: string; trim?: TrimSource | null }): Promise<void> {
+  await q("clips").insert({
+    id: c.id, run_id: c.runId, original_name: c.originalName, declared_type: c.declaredType, declared_size: c.declaredSize, object_key: c.objectKey, uploaded_by: c.uploadedBy,
+    trim: c.trim ? JSON.stringify(c.trim) : null,
+  });
 }
 
 export async function findClip(q: Db, id: string, opts: { lock?: boolean } = {}): Promise<ClipRow | undefined> {

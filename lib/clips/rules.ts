@@ -1,4 +1,5 @@
 // Pure rules for clips: upload plans, object keys, the processing steps, and the frame index summary.
+import { codecName, containerName } from "./media-names";
 
 export const STEPS = ["verify", "hash", "index", "proxy", "thumbnails"] as const;
 export type Step = (typeof STEPS)[number];
@@ -87,8 +88,8 @@ export function summarizeIndex(pts: readonly number[], timeBase: Rational, keyfr
 
 /** Whether the original can be stepped frame by frame in a browser as it is (else a proxy is made). */
 export function stepsWellInBrowser(p: { formatName: string; codec: string; hasBFrames: boolean; firstPts: number; maxKeyframeIntervalS: number }): { ok: boolean; reason: string } {
-  if (!/\b(mp4|mov)\b/.test(p.formatName)) return { ok: false, reason: `a ${p.formatName} container is not reliably seekable in browsers` };
-  if (p.codec !== "h264") return { ok: false, reason: `${p.codec} video does not play in every browser` };
+  if (!/\b(mp4|mov)\b/.test(p.formatName)) return { ok: false, reason: `browsers do not seek reliably in ${containerName(p.formatName)} files` };
+  if (p.codec !== "h264") return { ok: false, reason: `${codecName(p.codec)} video does not play in every browser` };
   if (p.hasBFrames) return { ok: false, reason: "B-frames make some frames unreachable when stepping" };
   if (p.firstPts !== 0) return { ok: false, reason: "the first frame does not start at time 0" };
   if (p.maxKeyframeIntervalS > 0.55) return { ok: false, reason: `keyframes are up to ${p.maxKeyframeIntervalS.toFixed(2)} s apart, too far for quick stepping` };

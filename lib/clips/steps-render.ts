@@ -7,10 +7,10 @@ import { probePacketTimes } from "../video/ffprobe-packets";
 import { buildProxy } from "../video/proxy";
 import { renderThumbnails } from "../video/thumbnails";
 import { findFrameIndex, findRendition, saveProxy, saveThumbnails } from "./index-queries";
-import { proxyGop, proxyMismatch } from "./proxy-rules";
+import { proxyBuildFailure, proxyGop, proxyMismatch, proxyRefusal } from "./proxy-rules";
 import type { ClipRow } from "./queries";
 import { clipObjectKey, stepsWellInBrowser } from "./rules";
-import { PermanentStepError, type StepOutcome } from "./step-errors";
+import { isTransientToolError, PermanentStepError, type StepOutcome } from "./step-errors";
 
 // The steps that write renditions: the stepping proxy and the thumbnails. Work files live in a
 // temporary folder that is always removed; results go to the object store.
@@ -34,10 +34,16 @@ export async function proxyStep(clip: ClipRow): Promise<StepOutcome> {
   }
   return inTempDir(clip.id, async (dir) => {
     const out = path.join(dir, "proxy.mp4");
-    await buildProxy(await presignGet(clip.objectKey, 6 * 3600), out, { timescale: index.timeBase.den, gop: proxyGop(index.averageRate) });
+    try {
+      await buildProxy(await presignGet(clip.objectKey, 6 * 3600), out, { timescale: index.timeBase.den, gop: proxyGop(index.averageRate) });
+    } catch (err) {
+      const message = err instanceof Error ? err.message : String(err);
+      if (isTransientToolError(message)) throw err;
+      throw new PermanentStepError(proxyBuildFailure(message));
+    }
     const made = await probePacketTimes(out);
     const problem = proxyMismatch(index, { pts: made.pts.map(Number), timeBase: made.timeBase });
-    if (problem) throw new PermanentStepError(`The stepping proxy was refused because ${problem}.`);
+    if (problem) throw new PermanentStepError(proxyRefusal(problem));
     const key = clipObjectKey(clip.id, "proxy.mp4");
     await putObjectFile(key, out, "video/mp4");
     await saveProxy(db(), clip.id, { proxyKey: key, proxyReason: `Made because ${decision.reason}.`, proxyOffsetPts: index.firstPts });

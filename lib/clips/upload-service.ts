@@ -35,10 +35,10 @@ export async function startUpload(actor: Actor, runId: string, v: In<typeof star
   const plan = refusal ? { partSize: 0, partCount: 0 } : planParts(v.size, env().CLIP_PART_SIZE_MB * 1024 * 1024);
   const uploadId = refusal ? null : await createMultipartUpload(key, v.contentType);
   await db().transaction(async (trx) => {
-    await insertClip(trx, { id, runId, originalName: v.fileName, declaredType: v.contentType, declaredSize: v.size, objectKey: key, uploadedBy: actor.id });
+    await insertClip(trx, { id, runId, originalName: v.fileName, declaredType: v.contentType, declaredSize: v.size, objectKey: key, uploadedBy: actor.id, trim: v.trim ?? null });
     if (refusal) await updateClip(trx, id, { status: "rejected", rejectReason: refusal });
     if (uploadId) await insertUpload(trx, { clipId: id, uploadId, ...plan });
-    await recordChange(trx, actor, { action: refusal ? "clip.refused" : "clip.upload_started", entity: "clip", entityId: id, after: { runId, fileName: v.fileName, size: v.size, ...plan, reason: refusal } });
+    await recordChange(trx, actor, { action: refusal ? "clip.refused" : "clip.upload_started", entity: "clip", entityId: id, after: { runId, fileName: v.fileName, size: v.size, ...plan, reason: refusal, ...(v.trim ? { trim: v.trim } : {}) } });
   });
   return { clipId: id, status: refusal ? ("rejected" as const) : ("uploading" as const), rejectReason: refusal, ...plan, parts: [] as { partNumber: number; size: number }[] };
 }

@@ -1,4 +1,5 @@
 // What ffprobe said about an uploaded file, turned into a verdict in words a technician understands.
+import { acceptedInWords, containerName, rawStreamName } from "./media-names";
 import type { Rational } from "./rules";
 
 export interface ProbeSummary {
@@ -46,8 +47,13 @@ export function verdictFromProbe(json: Json, acceptedContainers: readonly string
   const video = streams.find((s) => s.codec_type === "video" && !(s.disposition?.attached_pic === 1));
   const audio = streams.filter((s) => s.codec_type === "audio").length;
   if (!video) return { ok: false, reason: audio > 0 ? "The file has sound but no picture: it contains no video stream." : "The file contains no video stream." };
+  const raw = rawStreamName(format);
+  if (raw) return { ok: false, reason: rawStreamRefusal(raw) };
   if (!names.some((n) => acceptedContainers.includes(n))) {
-    return { ok: false, reason: `The container ${format} is not accepted here; accepted: ${acceptedContainers.join(", ")}.` };
+    return {
+      ok: false,
+      reason: `This file is ${withArticle(containerName(format))} file, which this lab does not accept for timing. Export the recording as one of: ${acceptedInWords(acceptedContainers)}.`,
+    };
   }
   const declaredFrames = video.nb_frames !== undefined ? Number(video.nb_frames) : null;
   if (declaredFrames === 0) return { ok: false, reason: "The video stream has no frames." };
@@ -79,4 +85,21 @@ function rotationOf(video: Json): number {
   const side = (video.side_data_list ?? []).find((d: Json) => d.rotation !== undefined);
   const r = side ? Number(side.rotation) : Number(video.tags?.rotate ?? 0);
   return ((Math.round(r) % 360) + 360) % 360;
+}
+
+/** "an MPEG…", "a Matroska…", "an flv…": the article for a name as it is read aloud. */
+export function withArticle(name: string): string {
+  const vowelSound = /^[aeiouAEIOU]/.test(name) || /^[FHLMNRSXfhlmnrsx](?![a-z])/.test(name) || /^(flv|mkv|mxf|mpeg|mov|nut|rm|swf)\b/.test(name);
+  return `${vowelSound ? "an" : "a"} ${name}`;
+}
+
+/**
+ * A raw elementary stream has pictures but no clock: no frame carries a time, so no drop can be
+ * timed from it. Refused, saying so and what to do.
+ */
+export function rawStreamRefusal(codec: string): string {
+  return (
+    `This file is a raw ${codec} stream: the pictures without a container, so no frame carries a time and drop times cannot be measured from it. ` +
+    "Export the recording from the recorder in a container that keeps its timestamps (MP4, Matroska, or an MPEG program or transport stream) and upload that file."
+  );
 }

@@ -122,6 +122,8 @@ function clips(doc: Doc, r: ReportData): void {
   heading(doc, "Recordings");
   const rows = r.clips.map((c) => [c.originalName, String(c.frameCount ?? "—"), frameRate(c.rate, c.averageRate), c.sha256 ?? "not hashed"]);
   table(doc, [{ head: "File", width: 120 }, { head: "Frames", width: 40, align: "right" }, { head: "Rate fps", width: 52, align: "right" }, { head: "SHA-256", width: 287 }], rows.length ? rows : [["No recordings", "", "", ""]], 7);
+  // Where a recording was cut from: the frames it really holds, in the original's seconds.
+  for (const c of r.clips) if (c.trimNote) paragraph(doc, `${c.originalName}: ${c.trimNote}`, { size: 7.5, color: MUTED });
 }
 
 function rulings(doc: Doc, r: ReportData): void {

@@ -1,4 +1,5 @@
 import type { Db } from "../db";
+import { trimKept } from "../clips/trim-provenance";
 import { CURRENT_SUBMITTED_G } from "../readings/queries";
 
 // What the report adds to the results: each settled drop's marks and clip, and the clips' identity.
@@ -31,6 +32,8 @@ export interface ReportClipRow {
   averageRate: number | null;
   /** Seconds per tick of the clip's frame timestamps, as num/den; null before it is indexed. */
   timeBase: { num: number; den: number } | null;
+  /** For a clip trimmed in the browser: the window asked for and the frames really kept, in words. */
+  trimNote: string | null;
 }
 
 /** Marks of settled drops only, so nothing of a drop still being read blind leaves this query. */
@@ -63,7 +66,7 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     .where("x.submission_id", submissionId)
     .where("c.status", "ready")
     .orderBy([{ column: "x.round" }, { column: "x.serial" }, { column: "c.created_at" }])
-    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "f.frame_count", "f.nominal_rate", "f.average_rate", "f.time_base_num", "f.time_base_den");
+    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "c.trim", "f.frame_count", "f.nominal_rate", "f.average_rate", "f.first_pts", "f.last_pts", "f.time_base_num", "f.time_base_den");
   return rows.map((r) => ({
     id: r.id,
     runId: r.run_id,
@@ -73,5 +76,8 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     rate: r.nominal_rate,
     averageRate: r.average_rate,
     timeBase: r.time_base_num ? { num: r.time_base_num, den: r.time_base_den } : null,
+    trimNote: r.trim
+      ? trimKept(r.trim, r.frame_count ? { firstPts: Number(r.first_pts), lastPts: Number(r.last_pts), timeBase: { num: r.time_base_num, den: r.time_base_den } } : null).note
+      : null,
   }));
 }

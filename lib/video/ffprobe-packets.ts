@@ -1,5 +1,5 @@
 import { spawn } from "node:child_process";
-import { parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from "./packet-order";
+import { decodablePackets, fillFrameTimes, parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from "./packet-order";
 
 // Per-frame timestamps without decoding: ffprobe's packet list is read in ~1 s for an hour of
 // 1080p, where -show_frames would decode every frame (minutes). Packets come in decode order;
@@ -7,6 +7,7 @@ import { parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from ".
 //   mp4  pts on every packet; B-frame delay hidden by an edit list (first pts 0 or the offset, dts < it).
 //   mkv  pts in a 1 ms time base (rounded: 30000/1001 steps 33/34 ms); dts N/A on reordered packets.
 //   ts   90 kHz; ffmpeg's muxer starts at 1.4 s, plus the B-frame delay, plus any offset.
+//   mpeg program streams (.mpg, .vob): 90 kHz, but a pts only every few packets: decoded instead.
 //   avi  no pts at all for H.264; MPEG-4 Part 2 has pts = dts, except N/A on the frames that
 //        B-frames reorder. Every chunk owns one slot of the stream rate (empty chunks fill the
 //        gaps of a variable rate), so the dts is the frame's time. Decoding does not help:
@@ -70,18 +71,47 @@ function streamLines(cmd: string, args: string[], onLine: (line: string) => void
   });
 }
 
+/**
+ * Every frame's time and key flag from a decoding pass (ffprobe -show_frames): slow, so only for
+ * files whose packets do not all carry a time. MPEG program streams put a timestamp on a packet
+ * only every so often (at most 0.7 s apart): the frames that carry one keep it, the others are
+ * placed evenly between them (fillFrameTimes). The decoder's own "best effort" guesses are not
+ * used: for H.264 in a program stream they give some frames a neighbour's decode time.
+ */
+async function decodedFrameTimes(file: string): Promise<{ pts: number[]; keyframes: number[] }> {
+  const pts: (number | null)[] = [];
+  const keyframes: number[] = [];
+  const args = ["-v", "error", "-select_streams", "v:0", "-show_entries", "frame=key_frame,pts", "-of", "csv=p=1", file];
+  await streamLines("ffprobe", args, (line) => {
+    const p = parseProbeLine(line);
+    if (p?.kind !== "frame") return;
+    if (p.key) keyframes.push(pts.length);
+    pts.push(p.time);
+  });
+  return { pts: fillFrameTimes(pts), keyframes };
+}
+
 export async function probePacketTimes(file: string): Promise<PacketTimes> {
   const packets: RawPacket[] = [];
   let stream: { timeBase: Rational; startPts: number | null } | null = null;
-  const args = ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags:stream=time_base,start_pts", "-of", "csv=p=1", file];
+  let formatName = "";
+  const args = ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags:stream=time_base,start_pts:format=format_name", "-of", "csv=p=1", file];
   await streamLines("ffprobe", args, (line) => {
     const p = parseProbeLine(line);
     if (p?.kind === "packet") packets.push(p.packet);
     else if (p?.kind === "stream") stream = { timeBase: p.timeBase, startPts: p.startPts };
+    else if (p?.kind === "format") formatName = p.formatName;
   });
   const s = stream as { timeBase: Rational; startPts: number | null } | null;
   if (!s) throw new Error(`${file} has no video stream`);
   if (packets.length === 0) throw new Error(`${file} has no video packets`);
+  // Only AVI's chunk slots make a dts the frame's time; elsewhere a packet without a pts needs the decoder.
+  const isAvi = formatName.split(",").includes("avi");
+  if (!isAvi && decodablePackets(packets).some((p) => p.pts === null)) {
+    const frames = await decodedFrameTimes(file);
+    if (frames.pts.length === 0) throw new Error(`${file} has no frame a decoder can show`);
+    return { ...s, ...frames, clock: "pts" };
+  }
   return { ...s, ...toDisplayOrder(packets) };
 }
 

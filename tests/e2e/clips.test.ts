@@ -1,3 +1,4 @@
+import { execFileSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { createWriteStream, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
@@ -148,7 +149,8 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
   it("trims in the browser to the chosen window, and the stored clip holds exactly those frames", async () => {
     const source = frameCodedMp4({ seconds: 10, fps: 25, gop: 25, name: `clips-e2e-coded-${Date.now()}.mp4` });
     const name = path.basename(source);
-    const trimmedName = name.replace(/\.mp4$/, "-trim-3-6.mp4");
+    // 3.5 s is between keyframes (one a second): the copy must start at 3 s and the clip still work.
+    const trimmedName = name.replace(/\.mp4$/, "-trim-3.5-6.mp4");
     const { page, recordings } = await technicianOnRun();
 
     await recordings.getByLabel("Video files to upload").setInputFiles(source);
@@ -157,13 +159,14 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     const panel = row.getByRole("group", { name: "Trim first" });
     await panel.getByText("The recording lasts 0:10.000.", { exact: false }).waitFor();
     await panel.getByText(/begins at the keyframe at or before the start/).waitFor();
-    await panel.getByLabel("Start").fill("3");
+    await panel.getByLabel("Start").fill("3.5");
     await panel.getByLabel("End").fill("0:06");
     await screenshot(page, "clips-trim-panel");
     await panel.getByRole("button", { name: "Trim and upload" }).click();
 
     const trimmed = recordings.getByRole("article", { name: new RegExp(trimmedName.replace(/\./g, "\\.")) });
-    await trimmed.getByText(`Trimmed in the browser from ${name}: 3 s to 6 s`, { exact: false }).waitFor({ timeout: 60_000 });
+    // The note says what was asked; the clip's page says what was really kept (checked below).
+    await trimmed.getByText(`Trimmed in the browser from ${name}: asked for 3.5 s to 6 s.`, { exact: false }).waitFor({ timeout: 60_000 });
     await trimmed.getByText("Stored in full.").waitFor({ timeout: 30_000 });
     await screenshot(page, "clips-trimmed-uploaded");
     const clip = await waitForClip(lead, (await clipNamed(trimmedName)).id);
@@ -173,10 +176,32 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     const stored = path.join(DOWNLOADS, trimmedName);
     await pipeline(await getObjectStream(clipObjectKey(clip.id, "original")), createWriteStream(stored));
     const codes = await readFrameCodes(stored);
-    // Stream copy starts at the keyframe at or before 3.0 s: with one every 25 frames, frame 75.
+    // Stream copy starts at the keyframe at or before 3.5 s: with one every 25 frames, frame 75.
     expect(codes[0]).toBe(75);
     codes.forEach((c, i) => expect(c, `frame ${i} of the trimmed clip`).toBe(75 + i));
     expect(Math.abs(codes[codes.length - 1] - 150)).toBeLessThanOrEqual(1);
     expect(clip.index?.frameCount).toBe(codes.length);
+    // Kept frames in the original's seconds (the trim keeps the original's timestamps).
+    expect(clip.trim).toMatchObject({ sourceName: name, requestedStartS: 3.5, requestedEndS: 6, keptFirstS: codes[0] / 25, keptLastS: codes[codes.length - 1] / 25 });
+    await page.goto(`${APP_URL}/clips/${clip.id}`);
+    expect(clip.trim!.note).toMatch(/kept the frames shown from 3 s to .* It starts before the start asked for/);
+    await page.getByText(clip.trim!.note).waitFor();
+    await screenshot(page, "clips-trimmed-provenance");
+  });
+
+  it("refuses a raw H.264 stream in words, and the later steps read Not needed", async () => {
+    const mp4 = frameCodedMp4({ seconds: 1, name: `clips-e2e-raw-${Date.now()}.mp4` });
+    const raw = mp4.replace(/\.mp4$/, ".h264");
+    execFileSync("ffmpeg", ["-v", "error", "-y", "-i", mp4, "-c", "copy", "-bsf:v", "h264_mp4toannexb", "-f", "h264", raw]);
+    const name = path.basename(raw);
+    const { page, recordings } = await technicianOnRun();
+    await recordings.getByLabel("Video files to upload").setInputFiles(raw);
+    const row = recordings.getByRole("article", { name: new RegExp(name.replace(/\./g, "\\.")) });
+    await row.getByRole("button", { name: `Upload whole file ${name}` }).click();
+    await row.getByText(/^This file is a raw H\.264 stream: .*no frame carries a time/).first().waitFor({ timeout: 30_000 });
+    const steps = row.getByRole("list", { name: `Processing steps of ${name}` });
+    expect(await steps.getByText("Not needed").count()).toBe(4);
+    expect(await steps.getByText("Waiting").count()).toBe(0);
+    await screenshot(page, "clips-raw-stream-refused");
   });
 });

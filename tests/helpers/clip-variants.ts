@@ -12,6 +12,7 @@ export const CLIP_VARIANTS: [string, Partial<SynthOptions>][] = [
   ["first timestamp 10.5 s", { start: 10.5 }],
   ["Matroska", { container: "mkv" }],
   ["AVI", { container: "avi" }],
+  ["AVI, MPEG-4 Part 2 with B-frames", { container: "avi", bframes: true }],
   ["MPEG-TS", { container: "ts" }],
   ["MPEG-TS, 29.97, VFR, B-frames, start 3 s", { container: "ts", fps: "30000/1001", vfr: true, bframes: true, start: 3 }],
 ];

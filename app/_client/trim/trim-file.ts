@@ -5,12 +5,13 @@
 import type { FFFSType, LogEvent } from "@ffmpeg/ffmpeg";
 import { guessType } from "../upload/transport";
 import { loadFfmpeg } from "./ffmpeg-loader";
-import { packetsAround } from "./trim-probe";
-import { copyEndFor, secondsLabel, splitName, trimmedName } from "./trim-rules";
+import type { TrimSource } from "@/lib/clips/schema";
+import { packetsAround, startTimeOf } from "./trim-probe";
+import { copyEndFor, secondsLabel, splitName, trimArgs, trimmedName } from "./trim-rules";
 
 let runs = 0;
 
-export async function trimFile(file: File, start: number, end: number, onLog: (line: string) => void): Promise<File> {
+export async function trimFile(file: File, start: number, end: number, onLog: (line: string) => void): Promise<{ file: File; source: TrimSource }> {
   const ffmpeg = await loadFfmpeg();
   const { ext } = splitName(file.name);
   const n = ++runs;
@@ -27,15 +28,16 @@ export async function trimFile(file: File, start: number, end: number, onLog: (l
   await ffmpeg.mount("WORKERFS" as FFFSType, { blobs: [{ name: input.slice(dir.length + 1), data: file }] }, dir);
   ffmpeg.on("log", log);
   try {
-    const to = copyEndFor(await packetsAround(ffmpeg, input, end), end);
+    const sourceStartS = await startTimeOf(ffmpeg, input);
+    const to = copyEndFor(await packetsAround(ffmpeg, input, end, sourceStartS), end);
     onLog(`Cutting the copy at decode time ${to.toFixed(3)} s so that it ends with the frame shown at ${secondsLabel(end)} s.`);
-    const args = ["-hide_banner", "-ss", secondsLabel(start), "-to", to.toFixed(6), "-i", input, "-c", "copy", "-map", "0", "-avoid_negative_ts", "make_zero", output];
-    const code = await ffmpeg.exec(args);
+    const code = await ffmpeg.exec(trimArgs(input, output, start, to));
     if (code !== 0) throw new Error(`ffmpeg could not trim this file (exit code ${code}). Its last words: ${lines.slice(-3).join(" ") || "none"}`);
     const data = await ffmpeg.readFile(output);
     await ffmpeg.deleteFile(output).catch(() => undefined);
     if (typeof data === "string" || data.length === 0) throw new Error("ffmpeg wrote an empty file: is the window inside the recording?");
-    return new File([data as Uint8Array<ArrayBuffer>], trimmedName(file.name, start, end), { type: file.type || guessType(file.name), lastModified: Date.now() });
+    const out = new File([data as Uint8Array<ArrayBuffer>], trimmedName(file.name, start, end), { type: file.type || guessType(file.name), lastModified: Date.now() });
+    return { file: out, source: { sourceName: file.name, sourceStartS: Math.max(0, sourceStartS), requestedStartS: start, requestedEndS: end } };
   } finally {
     ffmpeg.off("log", log);
     await ffmpeg.unmount(dir).catch(() => undefined);

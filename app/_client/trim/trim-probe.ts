@@ -14,8 +14,12 @@ async function probeText(ffmpeg: FFmpeg, args: string[], out: string): Promise<s
   return String(text);
 }
 
-export async function packetsAround(ffmpeg: FFmpeg, input: string, end: number): Promise<PacketTime[]> {
-  const start = Number((await probeText(ffmpeg, ["-v", "error", "-show_entries", "format=start_time", "-of", "csv=p=0", input], "/probe-start.txt")).trim()) || 0;
+/** The original's start time (seconds), the zero of every time the trim panel shows. */
+export async function startTimeOf(ffmpeg: FFmpeg, input: string): Promise<number> {
+  return Number((await probeText(ffmpeg, ["-v", "error", "-show_entries", "format=start_time", "-of", "csv=p=0", input], "/probe-start.txt")).trim()) || 0;
+}
+
+export async function packetsAround(ffmpeg: FFmpeg, input: string, end: number, start: number): Promise<PacketTime[]> {
   const from = Math.max(0, start + end - AROUND_S);
   const csv = await probeText(
     ffmpeg,

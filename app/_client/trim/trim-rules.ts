@@ -51,6 +51,20 @@ export function rangeProblem(start: number | null, end: number | null, duration:
   return null;
 }
 
+/**
+ * ffmpeg's arguments for the trim: a stream copy from the keyframe at or before `start` up to the
+ * decode time `to` (copyEndFor), every stream kept. -copyts keeps the original's timestamps on
+ * every packet, so the server reads from the clip's own frames where each sat in the original.
+ */
+export function trimArgs(input: string, output: string, start: number, to: number): string[] {
+  return ["-hide_banner", "-ss", secondsLabel(start), "-to", to.toFixed(6), "-i", input, "-c", "copy", "-map", "0", "-copyts", output];
+}
+
+/** The note beside a trimmed upload; the frames really kept are shown on the clip's page once indexed. */
+export function trimmedNote(sourceName: string, start: number, end: number): string {
+  return `Trimmed in the browser from ${sourceName}: asked for ${secondsLabel(start)} s to ${secondsLabel(end)} s. The clip's page shows which frames of the original were kept: a copy without re-encoding starts at the keyframe at or before the start.`;
+}
+
 /** One video packet's timestamps in seconds since the start of the recording, in file (decode) order. */
 export interface PacketTime {
   pts: number;

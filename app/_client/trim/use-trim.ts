@@ -14,7 +14,7 @@ export interface TrimState {
 /** Runs one trim at a time and tells the panel how far it is. */
 export function useTrim() {
   const [state, setState] = useState<TrimState>({ phase: "idle", line: "", error: null });
-  const run = useCallback(async (file: File, start: number, end: number): Promise<File | null> => {
+  const run = useCallback(async (file: File, start: number, end: number): Promise<Awaited<ReturnType<typeof trimFile>> | null> => {
     setState({ phase: "loading", line: "", error: null });
     try {
       await loadFfmpeg();

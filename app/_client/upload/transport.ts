@@ -1,4 +1,5 @@
 // The browser's side of the clip upload API, and the PUT of one part straight to storage.
+import type { TrimSource } from "@/lib/clips/schema";
 import { fetchJson } from "@/lib/http/client";
 import { PartError, pausedError } from "./errors";
 import type { Network, Transport, UploadState } from "./multipart";
@@ -12,8 +13,8 @@ export interface StartAnswer {
 }
 
 /** Starts an upload; a file refused from its size alone comes back as `rejected` with the reason. */
-export function startUpload(runId: string, file: File): Promise<StartAnswer> {
-  return fetchJson<StartAnswer>(`/api/runs/${runId}/clips`, { method: "POST", body: { fileName: file.name, size: file.size, contentType: file.type || guessType(file.name) } });
+export function startUpload(runId: string, file: File, trim?: TrimSource): Promise<StartAnswer> {
+  return fetchJson<StartAnswer>(`/api/runs/${runId}/clips`, { method: "POST", body: { fileName: file.name, size: file.size, contentType: file.type || guessType(file.name), ...(trim ? { trim } : {}) } });
 }
 
 const TYPES: Record<string, string> = { mp4: "video/mp4", m4v: "video/mp4", mov: "video/quicktime", mkv: "video/x-matroska", webm: "video/webm", avi: "video/x-msvideo", ts: "video/mp2t", mts: "video/mp2t" };

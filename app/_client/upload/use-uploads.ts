@@ -1,6 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useReducer, useRef } from "react";
+import type { TrimSource } from "@/lib/clips/schema";
 import { useRefreshRunClips } from "../clips";
 import { isAbort, sendFile, type Progress } from "./multipart";
 import { removePending, savePending } from "./pending-store";
@@ -89,14 +90,14 @@ export function useUploads(runId: string) {
   }, []);
 
   const start = useCallback(
-    async (key: string, file?: File, note?: string | null) => {
+    async (key: string, file?: File, note?: string | null, trim?: TrimSource) => {
       const job = jobsNow.current.find((j) => j.key === key);
       if (!job || job.clipId || starting.current.has(key)) return; // a double click starts one upload
       starting.current.add(key);
       const f = file ?? job.file;
       patch(key, { file: f, stage: "starting", error: null, ...(note !== undefined ? { note } : {}) });
       try {
-        const plan = await startUpload(runId, f);
+        const plan = await startUpload(runId, f, trim);
         refresh();
         if (plan.status === "rejected") return patch(key, { stage: "rejected", clipId: plan.clipId, rejectReason: plan.rejectReason });
         patch(key, { clipId: plan.clipId, partCount: plan.partCount });

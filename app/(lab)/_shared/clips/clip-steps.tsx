@@ -8,6 +8,7 @@ const STATE: Record<StepState, { word: string; mark: string; tone: string }> = {
   retrying: { word: "Retrying", mark: "↻", tone: "text-wick-700" },
   done: { word: "Done", mark: "✓", tone: "text-ok-700" },
   skipped: { word: "Skipped", mark: "–", tone: "text-ink-600" },
+  not_needed: { word: "Not needed", mark: "–", tone: "text-ink-600" },
   failed: { word: "Failed", mark: "✕", tone: "text-bad-700" },
 };
 

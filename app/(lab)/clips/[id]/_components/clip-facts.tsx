@@ -16,6 +16,7 @@ export function ClipFacts({ clip }: { clip: ClipView }) {
     { label: "Container", value: clip.format ? <span title={clip.format}>{containerName(clip.format)}</span> : pending("not probed yet") },
     { label: "Uploaded", value: <LocalTime iso={clip.createdAt} /> },
     { label: "Ready at", value: clip.readyAt ? <LocalTime iso={clip.readyAt} /> : pending("not yet") },
+    ...(clip.trim ? [{ label: "Cut from", value: clip.trim.note }] : []),
   ];
   const proxy = proxyDecision(clip);
   return (

@@ -2,7 +2,8 @@
 
 import { useEffect, useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { formatTime, parseTime, rangeProblem, secondsLabel } from "@/app/_client/trim/trim-rules";
+import type { TrimSource } from "@/lib/clips/schema";
+import { formatTime, parseTime, rangeProblem, trimmedNote } from "@/app/_client/trim/trim-rules";
 import { useTrim } from "@/app/_client/trim/use-trim";
 import { TimeField } from "./time-field";
 
@@ -17,7 +18,7 @@ function useObjectUrl(file: File): string | null {
 }
 
 /** A local preview, a start and an end, then a stream-copy trim in the browser before uploading. */
-export function TrimPanel({ file, onTrimmed, onCancel }: { file: File; onTrimmed: (out: File, note: string) => void; onCancel: () => void }) {
+export function TrimPanel({ file, onTrimmed, onCancel }: { file: File; onTrimmed: (out: File, note: string, source: TrimSource) => void; onCancel: () => void }) {
   const id = useId();
   const url = useObjectUrl(file);
   const video = useRef<HTMLVideoElement>(null);
@@ -39,7 +40,7 @@ export function TrimPanel({ file, onTrimmed, onCancel }: { file: File; onTrimmed
     setProblem(wrong);
     if (wrong) return;
     const out = await trim.run(file, s!, e!);
-    if (out) onTrimmed(out, `Trimmed in the browser from ${file.name}: ${secondsLabel(s!)} s to ${secondsLabel(e!)} s, starting at the keyframe at or before ${secondsLabel(s!)} s.`);
+    if (out) onTrimmed(out.file, trimmedNote(file.name, s!, e!), out.source);
   }
 
   return (

@@ -52,9 +52,9 @@ export function UploadRow({ job, uploads }: { job: UploadJob; uploads: Uploads }
           <TrimPanel
             file={f}
             onCancel={() => setTrimming(false)}
-            onTrimmed={(out, note) => {
+            onTrimmed={(out, note, source) => {
               setTrimming(false);
-              void uploads.start(job.key, out, note);
+              void uploads.start(job.key, out, note, source);
             }}
           />
         )}

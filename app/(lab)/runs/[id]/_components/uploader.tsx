@@ -4,7 +4,8 @@ import { Button } from "@/components/ui/button";
 import type { Uploads } from "@/app/_client/upload/use-uploads";
 import { UploadRow } from "./upload-row";
 
-const ACCEPT = "video/*,.mp4,.m4v,.mov,.mkv,.webm,.avi,.mts,.m2ts,.ts";
+// Only a hint for the file picker: what is accepted is decided by ffprobe on the stored bytes.
+const ACCEPT = "video/*,.mp4,.m4v,.mov,.mkv,.webm,.avi,.mts,.m2ts,.ts,.mpg,.mpeg,.vob";
 
 /** Pick recordings, optionally trim them, and send them straight to storage. */
 export function Uploader({ uploads }: { uploads: Uploads }) {
