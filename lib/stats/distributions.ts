@@ -25,8 +25,22 @@ export function logGamma(x: number): number {
   return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(a);
 }
 
-/** ln B(a, b) = ln Γ(a) + ln Γ(b) − ln Γ(a + b). */
+/**
+ * ln B(a, b) = ln Γ(a) + ln Γ(b) − ln Γ(a + b). With a large argument the three ln Γ are large and
+ * nearly cancel, so the Stirling parts are taken out and cancelled by hand, as R's lbeta does
+ * (after Didonato & Morris 1992; the Stirling error from stirlingError below).
+ */
 export function logBeta(a: number, b: number): number {
+  const p = Math.min(a, b);
+  const q = Math.max(a, b);
+  if (p >= 10) {
+    const corr = stirlingError(p) + stirlingError(q) - stirlingError(p + q);
+    return -0.5 * Math.log(q) + 0.5 * Math.log(2 * Math.PI) + corr + (p - 0.5) * Math.log(p / (p + q)) + q * Math.log1p(-p / (p + q));
+  }
+  if (q >= 10) {
+    const corr = stirlingError(q) - stirlingError(p + q);
+    return logGamma(p) + corr + p - p * Math.log(p + q) + (q - 0.5) * Math.log1p(-p / (p + q));
+  }
   return logGamma(a) + logGamma(b) - logGamma(a + b);
 }
 
@@ -201,18 +215,54 @@ export function nonCentralTCdf(t: number, df: number, delta: number): number {
   return negative ? 1 - tnc : tnc;
 }
 
+/**
+ * stirlerr(x) = ln Γ(x + 1) − (x + ½)·ln x + x − ½·ln 2π = ln Γ(x) − (x − ½)·ln x + x − ½·ln 2π,
+ * the error of Stirling's formula.
+ * Loader (2000), "Fast and accurate computation of binomial probabilities": its asymptotic series
+ * (coefficients 1/12, 1/360, 1/1260, 1/1680, 1/1188) above 15, ln Γ directly below, where it is small.
+ */
+function stirlingError(x: number): number {
+  if (x <= 15) return logGamma(x + 1) - (x + 0.5) * Math.log(x) + x - 0.5 * Math.log(2 * Math.PI);
+  const x2 = x * x;
+  const [s0, s1, s2, s3, s4] = [1 / 12, 1 / 360, 1 / 1260, 1 / 1680, 1 / 1188];
+  if (x > 500) return (s0 - s1 / x2) / x;
+  if (x > 80) return (s0 - (s1 - s2 / x2) / x2) / x;
+  if (x > 35) return (s0 - (s1 - (s2 - s3 / x2) / x2) / x2) / x;
+  return (s0 - (s1 - (s2 - (s3 - s4 / x2) / x2) / x2) / x2) / x;
+}
+
+/** bd0(x, μ) = x·ln(x/μ) + μ − x, by its series in v = (x − μ)/(x + μ) when x is near μ (Loader 2000). */
+function deviance(x: number, mu: number): number {
+  if (Math.abs(x - mu) < 0.1 * (x + mu)) {
+    const v = (x - mu) / (x + mu);
+    const v2 = v * v;
+    let sum = (x - mu) * v;
+    let ej = 2 * x * v;
+    for (let j = 1; j < 1000; j++) {
+      ej *= v2;
+      const next = sum + ej / (2 * j + 1);
+      if (next === sum) return next;
+      sum = next;
+    }
+    return sum;
+  }
+  return x * Math.log(x / mu) + mu - x;
+}
+
 /** Σⱼ [Pⱼ·I_x(j + ½, b) + Qⱼ·I_x(j + 1, b)] from the mode outwards (see nonCentralTCdf). */
 function poissonBetaSeries(x: number, b: number, del: number): number {
   const lambda = (del * del) / 2;
   const m = Math.floor(lambda);
   const logX = Math.log(x);
   const log1mX = Math.log1p(-x);
-  // Weights at the mode, in logs so that neither e^(−λ) nor λ^m overflows or underflows.
-  const logPoisson = -lambda + (m > 0 ? m * Math.log(lambda) : 0);
-  const p0 = Math.exp(logPoisson - logGamma(m + 1));
-  const q0 = del === 0 ? 0 : Math.sign(del) * Math.exp(Math.log(Math.abs(del)) + logPoisson - 0.5 * Math.LN2 - logGamma(m + 1.5));
-  // I_x(a, b) at the mode, and gᵃ = Γ(a + b)/(Γ(a + 1)Γ(b))·xᵃ(1 − x)ᵇ, for which I_x(a + 1, b) = I_x(a, b) − g(a).
-  const g = (a: number) => Math.exp(logGamma(a + b) - logGamma(a + 1) - logGamma(b) + a * logX + b * log1mX);
+  // Weights at the mode by Loader's saddle-point form, so that neither e^(−λ) nor λ^m under- or
+  // overflows and no digits are lost to ln Γ of a large argument (with λ = δ²/2 and y = m + ½):
+  //   P_m = e^(−bd0(m, λ) − stirlerr(m))/√(2πm),   |Q_m| = e^(−bd0(y, λ) − stirlerr(y))/√(2πy).
+  const p0 = m === 0 ? Math.exp(-lambda) : Math.exp(-deviance(m, lambda) - stirlingError(m)) / Math.sqrt(2 * Math.PI * m);
+  const y = m + 0.5;
+  const q0 = del === 0 ? 0 : (Math.sign(del) * Math.exp(-deviance(y, lambda) - stirlingError(y))) / Math.sqrt(2 * Math.PI * y);
+  // I_x(a, b) at the mode, and g(a) = xᵃ(1 − x)ᵇ/(a·B(a, b)), for which I_x(a + 1, b) = I_x(a, b) − g(a).
+  const g = (a: number) => Math.exp(a * logX + b * log1mX - Math.log(a) - logBeta(a, b));
   const iOdd0 = regularizedBeta(x, m + 0.5, b);
   const iEven0 = regularizedBeta(x, m + 1, b);
   const gOdd0 = g(m + 0.5);
@@ -238,8 +288,9 @@ function poissonBetaSeries(x: number, b: number, del: number): number {
   // Backward: j = m − 1, …, 0, with I_x(a − 1, b) = I_x(a, b) + g(a − 1).
   p = p0; q = q0; iOdd = iOdd0; iEven = iEven0; gOdd = gOdd0; gEven = gEven0;
   for (let j = m - 1; j >= 0; j--) {
-    gOdd *= (j + 1.5) / (x * (j + 0.5 + b));
-    gEven *= (j + 2) / (x * (j + 1 + b));
+    // A term that underflowed to 0 (x tiny) is computed afresh, never as 0 × ∞.
+    gOdd = gOdd > 0 ? (gOdd * (j + 1.5)) / (x * (j + 0.5 + b)) : g(j + 0.5);
+    gEven = gEven > 0 ? (gEven * (j + 2)) / (x * (j + 1 + b)) : g(j + 1);
     iOdd += gOdd;
     iEven += gEven;
     p *= (j + 1) / lambda;
