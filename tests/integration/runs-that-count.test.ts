@@ -6,7 +6,7 @@ import { signedIn, type Client } from "../helpers/app";
 import { demo, demoOrganisationId, makeUser } from "../helpers/fixtures";
 import { goodRun, newEdition, newRun, newSample, newSubmission } from "../helpers/intake";
 import { plainMp4 } from "../helpers/media";
-import { json, placeOnRun, read } from "../helpers/readings";
+import { json, placedDrops, placeOnRun, read } from "../helpers/readings";
 import { blockedBehind, settles } from "../helpers/locks";
 
 // Which run counts for a ball, voiding a run, and sign-off serialised with run changes. The test's
@@ -170,6 +170,14 @@ describe("voiding a run", () => {
     expect(await message(await voidRun(lead, mistake, "Voiding it a second time."), 409)).toMatch(/already voided/);
     expect(await message(await tech.request("PUT", `/api/runs/${mistake}`, { json: goodRun() }), 409)).toMatch(/voided/);
     await json(await sign(), 201);
+  });
+
+  it("a voided run's drops leave the reading queue", async () => {
+    const placed = await placedDrops(lead, { file: plainMp4() });
+    const queued = async () => (await json<{ items: { dropId: string }[] }>(await a.get("/api/work-queue"), 200)).items.map((i) => i.dropId);
+    expect(await queued()).toEqual(expect.arrayContaining(placed.dropIds));
+    await json(await voidRun(lead, placed.runId, "The clip shows another ball's test."), 200);
+    expect((await queued()).filter((id) => placed.dropIds.includes(id))).toEqual([]);
   });
 
   it("the submission shows each run's void, with who, when and why", async () => {
