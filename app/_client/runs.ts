@@ -6,7 +6,8 @@ import type { RunInput } from "@/lib/runs/schema";
 import type { RunView } from "@/lib/runs/view";
 import { SUBMISSIONS } from "./submissions";
 
-export type RunDetail = RunView & { submissionId: string; sampleSerial: string };
+/** `lockedReason`: why no change can be made while the submission is signed off (null while it can). */
+export type RunDetail = RunView & { submissionId: string; sampleSerial: string; lockedReason: string | null };
 
 const runKey = (id: string) => ["runs", id] as const;
 
@@ -40,4 +41,8 @@ export function useUpdateRun(id: string) {
 
 export function useAcceptRun(id: string) {
   return useRunChange(id, (reason: string) => fetchJson(`/api/runs/${id}/acceptance`, { method: "POST", body: { reason } }));
+}
+
+export function useVoidRun(id: string) {
+  return useRunChange(id, (reason: string) => fetchJson(`/api/runs/${id}/void`, { method: "POST", body: { reason } }));
 }

@@ -118,11 +118,13 @@ export async function updateDropOutcome(
 
 /**
  * Drops waiting for one reviewer: placed on a ready clip, not yet settled, and either holding the
- * reviewer's unfinished reading or still short of two readers none of whom is this reviewer.
+ * reviewer's unfinished reading or still short of two readers none of whom is this reviewer. A
+ * voided run's drops no longer count, so nobody is asked to read them.
  */
 export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Promise<DropRow[]> {
   const rows = await base(q)
     .where("c.status", "ready")
+    .whereNull("r.voided_at")
     .whereIn("d.state", ["unread", "read once"])
     .where((w) =>
       w
@@ -138,7 +140,7 @@ export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Prom
   return rows.map(toDrop);
 }
 
-/** The leads' queue: drops whose two readings disagree, the oldest first. */
+/** The leads' queue: drops whose two readings disagree, the oldest first (not of a voided run). */
 export async function listDiscrepancies(q: Db, limit = 200): Promise<DropRow[]> {
-  return (await base(q).where("d.state", "discrepancy").orderBy("d.state_changed_at", "asc").limit(limit)).map(toDrop);
+  return (await base(q).where("d.state", "discrepancy").whereNull("r.voided_at").orderBy("d.state_changed_at", "asc").limit(limit)).map(toDrop);
 }

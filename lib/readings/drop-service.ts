@@ -5,7 +5,7 @@ import { findClip } from "../clips/queries";
 import { db } from "../db";
 import { AppError } from "../errors";
 import { findRun } from "../runs/queries";
-import { assertUnlocked } from "../signoff/lock";
+import { assertDropUnlocked } from "../signoff/lock";
 import { assertLead } from "../submissions/policy";
 import { findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./drop-queries";
 import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer, isReviewer } from "./policy";
@@ -39,9 +39,9 @@ export async function placeDrop(actor: Actor, id: string, p: PlacementInput): Pr
   assertCanSeeDrops(actor);
   assertCanPlaceDrops(actor);
   await db().transaction(async (trx) => {
+    await assertDropUnlocked(trx, { dropId: id });
     const drop = await findDrop(trx, id, { lock: true });
     if (!drop) throw new AppError("not_found", "No such drop.");
-    await assertUnlocked(trx, drop.submissionId);
     const clip = await findClip(trx, p.clipId);
     if (!clip || clip.runId !== drop.runId) throw new AppError("validation", "Choose one of this run's clips.", { fields: { clipId: "Choose one of this run's clips." } });
     if (clip.status !== "ready") throw new AppError("validation", `The clip ${clip.originalName} is not ready for reading (${clip.status}).`, { fields: { clipId: "This clip is not ready." } });

@@ -4,7 +4,7 @@ import { findFrameIndex } from "../clips/index-queries";
 import { notifyBelowLimit, notifyDiscrepancy } from "../notifications/events";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
-import { assertUnlocked } from "../signoff/lock";
+import { assertDropUnlocked } from "../signoff/lock";
 import { findDrop, findDropOfReadingForUpdate, updateDropOutcome, type DropRow } from "./drop-queries";
 import { assertCanSeeDrops, assertReviewer, canSeeReading, isBlindFor } from "./policy";
 import { deleteDraft, findReading, insertReading, listReadingsOfDrop, markSubmitted, updateDraftMarks, type ReadingRow } from "./queries";
@@ -49,8 +49,9 @@ async function dropViewFor(actor: Actor, q: Db, dropId: string): Promise<DropVie
 export async function startReading(actor: Actor, dropId: string, marks: MarksInput = {}): Promise<DropView> {
   assertReviewer(actor, "read drops");
   return db().transaction(async (trx) => {
+    // The submission before the drop: the order sign-off takes them in.
+    await assertDropUnlocked(trx, { dropId });
     const drop = await lockedDrop(actor, trx, dropId);
-    await assertUnlocked(trx, drop.submissionId);
     if (!drop.clipId) throw new AppError("conflict", "This drop is not placed on a clip yet: a technician places it first.");
     const readings = await listReadingsOfDrop(trx, dropId);
     const mine = readings.filter((r) => r.reviewerId === actor.id);
@@ -103,12 +104,12 @@ const BOTH_IN = "Both readings of this drop are in: it can no longer be correcte
 export async function submitReading(actor: Actor, id: string): Promise<DropView> {
   assertCanSeeDrops(actor);
   return db().transaction(async (trx) => {
+    await assertDropUnlocked(trx, { readingId: id });
     const drop = await findDropOfReadingForUpdate(trx, id);
     const readings = drop ? await listReadingsOfDrop(trx, drop.id) : [];
     const r = readings.find((x) => x.id === id);
     if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     if (r.status !== "draft") throw new AppError("conflict", "This reading is already submitted.");
-    await assertUnlocked(trx, drop.submissionId);
     if (r.dispenseFrame === null || r.clearFrame === null) throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
     assertReadable(drop, r.clipId);
     if (r.supersedesId && currentReadings(readings).length >= 2) throw new AppError("conflict", BOTH_IN);
@@ -139,13 +140,13 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
 export async function correctReading(actor: Actor, id: string, reason: string): Promise<DropView> {
   assertReviewer(actor, "correct readings");
   return db().transaction(async (trx) => {
+    await assertDropUnlocked(trx, { readingId: id });
     const drop = await findDropOfReadingForUpdate(trx, id);
     const readings = drop ? await listReadingsOfDrop(trx, drop.id) : [];
     const r = readings.find((x) => x.id === id);
     if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     const current = currentReadings(readings);
     if (r.status !== "submitted") throw new AppError("conflict", "This reading is still a draft: change its marks directly.");
-    await assertUnlocked(trx, drop.submissionId);
     if (current.length >= 2) throw new AppError("conflict", BOTH_IN);
     if (!current.some((c) => c.id === r.id)) throw new AppError("conflict", "This reading was already replaced by a correction.");
     if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft")) throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");

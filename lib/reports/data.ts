@@ -7,6 +7,7 @@ import { SETTLED_STATES } from "../results/queries";
 import type { BallResult } from "../results/rules";
 import { loadSubmissionResults } from "../results/service";
 import { listRunsOfSubmission } from "../runs/queries";
+import { countingRun } from "../runs/rules";
 import { toRunView, type RunView } from "../runs/view";
 import { listSamples } from "../samples/queries";
 import { visibleSubmission } from "../submissions/service";
@@ -74,7 +75,7 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
   ]);
   const { edition, balls, decision } = results;
   const reportSamples = samples.map((x) => {
-    const run = runs.filter((r) => r.sampleId === x.id).at(-1);
+    const run = countingRun(runs.filter((r) => r.sampleId === x.id));
     return { id: x.id, serial: x.serial, round: x.round, weightG: x.weightG, weightLb: x.weightG / GRAMS_PER_POUND, receivedAt: x.receivedAt.toISOString(), run: run ? toRunView(run, x, edition) : null };
   });
   const sha = new Map(clips.map((c) => [c.id, c.sha256]));

@@ -2,6 +2,7 @@ import type { Actor } from "../auth/actor";
 import { db, type Db } from "../db";
 import { findEdition, type EditionRow } from "../editions/queries";
 import { listRunsOfSubmission } from "../runs/queries";
+import { countingRun } from "../runs/rules";
 import { assertReleased } from "../signoff/release";
 import { toRunView } from "../runs/view";
 import { listSamples } from "../samples/queries";
@@ -23,8 +24,8 @@ async function ballsOf(q: Db, s: SubmissionRow, edition: EditionRow): Promise<Ba
   const [samples, runs, drops] = await Promise.all([listSamples(q, s.id), listRunsOfSubmission(q, s.id), listResultDrops(q, s.id)]);
   const settled: readonly string[] = SETTLED_STATES;
   return samples.map((x) => {
-    // The ball's latest run counts: a re-test replaces the run before it.
-    const run = runs.filter((r) => r.sampleId === x.id).at(-1);
+    // The ball's latest run not voided counts: a re-test replaces the run before it.
+    const run = countingRun(runs.filter((r) => r.sampleId === x.id));
     const view = run ? toRunView(run, x, edition) : null;
     return {
       sampleId: x.id,

@@ -5,7 +5,7 @@ import { db, type Db } from "../db";
 import { AppError } from "../errors";
 import { notifyBelowLimit } from "../notifications/events";
 import { findDrop, type DropRow } from "../readings/drop-queries";
-import { assertUnlocked } from "../signoff/lock";
+import { assertDropUnlocked } from "../signoff/lock";
 import { assertCanSeeDrops } from "../readings/policy";
 import { listReadingsOfDrop, type ReadingRow } from "../readings/queries";
 import { currentReadings, marksFrom, type Marks } from "../readings/rules";
@@ -39,9 +39,10 @@ export async function ruleDrop(actor: Actor, dropId: string, input: RulingInput)
   assertCanSeeDrops(actor);
   assertCanRule(actor);
   return db().transaction(async (trx) => {
+    // The submission before the drop: the order sign-off takes them in.
+    await assertDropUnlocked(trx, { dropId });
     const drop = await findDrop(trx, dropId, { lock: true });
     if (!drop) throw new AppError("not_found", NO_DROP);
-    await assertUnlocked(trx, drop.submissionId);
     const existing = await findRulingOfDrop(trx, dropId);
     if (existing) throw new AppError("conflict", `This drop was already ruled by ${existing.ruledByName} on ${existing.ruledAt.toISOString().slice(0, 10)}; a ruling stands once made.`);
     if (drop.state !== "discrepancy") throw new AppError("conflict", `Only a drop whose readings disagree can be ruled; this one is ${drop.state}.`);

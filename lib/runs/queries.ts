@@ -23,6 +23,12 @@ export interface RunRow {
   acceptedByName: string | null;
   acceptedAt: Date | null;
   acceptReason: string | null;
+  /** A lead voided the run: it stays on record and no longer counts. */
+  voidedBy: string | null;
+  voidedByName: string | null;
+  voidedAt: Date | null;
+  voidReason: string | null;
+  createdAt: Date;
   dropCount: number;
 }
 
@@ -51,6 +57,11 @@ function toRun(r: Record<string, any>): RunRow {
     acceptedByName: r.accepted_by_name,
     acceptedAt: r.accepted_at,
     acceptReason: r.accept_reason,
+    voidedBy: r.voided_by,
+    voidedByName: r.voided_by_name,
+    voidedAt: r.voided_at,
+    voidReason: r.void_reason,
+    createdAt: r.created_at,
     dropCount: Number(r.drop_count),
   };
 }
@@ -59,7 +70,8 @@ const base = (q: Db) =>
   q("runs as r")
     .join("users as t", "t.id", "r.technician_id")
     .leftJoin("users as a", "a.id", "r.accepted_by")
-    .select("r.*", "t.name as technician_name", "a.name as accepted_by_name", q.raw("(select count(*) from drops d where d.run_id = r.id) as drop_count"));
+    .leftJoin("users as v", "v.id", "r.voided_by")
+    .select("r.*", "t.name as technician_name", "a.name as accepted_by_name", "v.name as voided_by_name", q.raw("(select count(*) from drops d where d.run_id = r.id) as drop_count"));
 
 function columns(v: RunColumns) {
   return {
@@ -94,13 +106,29 @@ export async function setAcceptance(q: Db, id: string, by: string, reason: strin
   await q("runs").where({ id }).update({ accepted_by: by, accepted_at: q.fn.now(), accept_reason: reason, updated_at: q.fn.now() });
 }
 
-export async function findRun(q: Db, id: string): Promise<RunRow | undefined> {
-  const r = await base(q).where("r.id", id).first();
+export async function setVoid(q: Db, id: string, by: string, reason: string): Promise<void> {
+  await q("runs").where({ id }).update({ voided_by: by, voided_at: q.fn.now(), void_reason: reason, updated_at: q.fn.now() });
+}
+
+export async function findRun(q: Db, id: string, opts: { lock?: boolean } = {}): Promise<RunRow | undefined> {
+  const query = base(q).where("r.id", id).first();
+  if (opts.lock) query.forUpdate("r");
+  const r = await query;
   return r ? toRun(r) : undefined;
 }
 
+/**
+ * Every run of the submission, in the order that decides which of a ball's runs counts (the last
+ * one not voided: `rules.ts` `countingRun`). Tested at is kept to the minute, so two runs can share
+ * it: the one recorded later comes after, and the id settles even that. A total order, so the run
+ * that counts never depends on where rows happen to sit.
+ */
 export async function listRunsOfSubmission(q: Db, submissionId: string): Promise<RunRow[]> {
-  const rows = await base(q).join("samples as x", "x.id", "r.sample_id").where("x.submission_id", submissionId).orderBy("r.tested_at");
+  const rows = await base(q).join("samples as x", "x.id", "r.sample_id").where("x.submission_id", submissionId).orderBy([
+    { column: "r.tested_at" },
+    { column: "r.created_at" },
+    { column: "r.id" },
+  ]);
   return rows.map(toRun);
 }
 
@@ -119,6 +147,7 @@ export async function findRunConditions(q: Db, submissionIds: string[]): Promise
     .join("submissions as s", "s.id", "x.submission_id")
     .join("specification_editions as e", "e.id", "s.edition_id")
     .whereIn("s.id", submissionIds)
+    .whereNull("r.voided_at")
     .select("s.id as submission_id", "r.accepted_at", "r.tested_at", "x.acclimation_started_at", "r.surface_temp_c", "r.roughness_ra_um",
       "e.min_acclimation_h", "e.surface_temp_min_c", "e.surface_temp_max_c", "e.roughness_max_sd_um");
   return rows.map((r) => ({

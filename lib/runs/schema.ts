@@ -26,6 +26,9 @@ export const runInputSchema = z.object({
 export type RunInput = z.input<typeof runInputSchema>;
 export type RunValues = z.output<typeof runInputSchema>;
 
-export const runAcceptanceSchema = z.object({
-  reason: text("Reason", 1000).refine((v) => v.length >= 10, "Write the reason in a sentence (at least 10 characters)."),
-});
+const reason = () => text("Reason", 1000).refine((v) => v.length >= 10, "Write the reason in a sentence (at least 10 characters).");
+
+export const runAcceptanceSchema = z.object({ reason: reason() });
+
+/** A lead voids a run that must not count; the reason is kept with the run. */
+export const runVoidSchema = z.object({ reason: reason() });

@@ -68,9 +68,20 @@ export async function restoreDropStates(q: Db, submissionId: string): Promise<vo
   );
 }
 
-/** Drops of the submission not yet settled (unread, read once, or in discrepancy). */
-export async function countUnsettledDrops(q: Db, submissionId: string): Promise<number> {
-  const r = await q("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id")
-    .where("s.submission_id", submissionId).whereIn("d.state", ["unread", "read once", "discrepancy"]).count<{ count: string }[]>("* as count").first();
-  return Number(r?.count ?? 0);
+/**
+ * Holds the submission row until the transaction ends. FOR KEY SHARE conflicts with the FOR UPDATE
+ * that sign-off and re-opening take, and with nothing a change of records or of the submission's
+ * other columns takes, so changes run side by side and only sign-off waits for them (or they for it).
+ */
+export async function holdSubmission(q: Db, submissionId: string): Promise<void> {
+  await q("submissions").where({ id: submissionId }).forKeyShare().select("id");
+}
+
+/** The submission a drop, or the drop of a reading, belongs to (no lock). */
+export async function submissionOfDrop(q: Db, of: { dropId: string } | { readingId: string }): Promise<string | null> {
+  const query = q("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as s", "s.id", "r.sample_id").select("s.submission_id").first();
+  if ("dropId" in of) query.where("d.id", of.dropId);
+  else query.whereRaw("d.id = (select drop_id from readings where id = ?)", [of.readingId]);
+  const row = await query;
+  return row?.submission_id ?? null;
 }

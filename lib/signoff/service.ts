@@ -9,7 +9,7 @@ import { assertLead } from "../submissions/policy";
 import { findSubmission, lockSubmission, updateSubmissionRow } from "../submissions/queries";
 import { findUserById } from "../users/queries";
 import { notifyResultsReleased } from "../notifications/events";
-import { countUnsettledDrops, insertReopening, insertSignature, listReopenings, listSignatures, restoreDropStates, setDropStates } from "./queries";
+import { insertReopening, insertSignature, listReopenings, listSignatures, restoreDropStates, setDropStates } from "./queries";
 import { currentRevision, diffResults, lockReason, signRefusal, type ResultChanges, type Snapshot } from "./rules";
 import type { ReopenInput, SignInput } from "./schema";
 
@@ -61,7 +61,8 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
     const s = (await findSubmission(trx, submissionId))!;
     const { signed, state, revision } = await lockState(trx, submissionId, s.reference);
     if (lockReason(state)) throw new AppError("conflict", `Submission ${s.reference} is already signed off (revision ${revision}).`);
-    const unsettled = await countUnsettledDrops(trx, submissionId);
+    // Only the runs that count: a replaced or voided run's unread drops do not hold the sign-off up.
+    const unsettled = results.balls.flatMap((b) => b.drops).filter((d) => !d.settled).length;
     if (unsettled > 0) throw new AppError("conflict", `${unsettled} drop${unsettled === 1 ? " is" : "s are"} not settled yet (unread, read once or in discrepancy); settle every drop before signing off.`);
     const previous = signed.at(-1);
     const changes = previous ? diffResults(previous.results as Snapshot, snapshotOf(results)) : null;

@@ -53,6 +53,20 @@ describe("signing in as each role", () => {
     await page.close();
   });
 
+  it("a signed-out visit to a mailed link (with its query) lands on that page after sign-in", async () => {
+    for (const target of ["/discrepancies", "/audit?action=submission."]) {
+      const page = await browser.newPage();
+      await page.goto(`${APP_URL}${target}`);
+      expect(new URL(page.url()).pathname).toBe("/sign-in");
+      await page.getByLabel("E-mail").fill(demo.email("lead"));
+      await page.getByLabel("Password").fill(demo.password);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForURL(`${APP_URL}${target}`);
+      await page.getByRole("heading", { level: 1 }).waitFor();
+      await page.close();
+    }
+  });
+
   it("a wrong password is explained in words on the form", async () => {
     const page = await browser.newPage();
     await signInAs(page, demo.email("reviewer"), "not-the-password");

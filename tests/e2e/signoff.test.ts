@@ -119,11 +119,11 @@ describe("the lead's desk", () => {
     await screenshot(page, "signoff-submission-locked");
   });
 
-  it("a run or reading change after sign-off is refused with the reason", async () => {
+  it("after sign-off the run page offers no change and says why; a reading change is refused with the reason", async () => {
+    // The run page no longer offers "Edit conditions" only to refuse the save: it shows the lock instead.
     await page.goto(`${APP_URL}/runs/${runId}`);
-    await page.getByRole("button", { name: "Edit conditions" }).click();
-    await page.getByRole("button", { name: "Save conditions" }).click();
-    await page.getByRole("alert").filter({ hasText: locked(1) }).waitFor();
+    await page.getByTestId("run-lock-notice").filter({ hasText: locked(1) }).waitFor({ timeout: 20_000 });
+    expect(await page.getByRole("button", { name: "Edit conditions" }).count()).toBe(0);
     await screenshot(page, "signoff-run-change-refused");
     const res = await a.post(`/api/drops/${disputed}/readings`, { dispenseFrame: 6 });
     expect((await json<{ error: { message: string } }>(res, 409)).error.message).toBe(locked(1));

@@ -125,6 +125,7 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/clips/[id]/complete": { path: async () => `/api/clips/${await uploadedClip()}/complete`, body: () => ({}), expect: clipEditors(200) },
   "GET /api/clips/[id]/frames": { path: async () => `/api/clips/${readyClip}/frames`, expect: clipReaders(200) },
   "POST /api/runs/[id]/acceptance": { path: async () => `/api/runs/${await flaggedRun()}/acceptance`, body: () => ({ reason: "Matrix acceptance reason." }), expect: leadOnly(200) },
+  "POST /api/runs/[id]/void": { path: async () => `/api/runs/${await run()}/void`, body: () => ({ reason: "Matrix void: recorded on the wrong ball." }), expect: leadOnly(200) },
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },

@@ -1,5 +1,6 @@
 import { redirect } from "next/navigation";
 import { homeFor } from "@/lib/auth/page-guard";
+import { safeReturnPath } from "@/lib/auth/return-to";
 import { currentActor } from "@/lib/auth/session";
 import { SignInForm } from "./_components/sign-in-form";
 
@@ -9,8 +10,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   const actor = await currentActor();
   if (actor) redirect(homeFor(actor));
   const { next, email } = await searchParams;
-  // Only same-site paths: an open redirect would let a link send people elsewhere after sign-in.
-  const safeNext = next && next.startsWith("/") && !next.startsWith("//") ? next : "/";
+  const safeNext = safeReturnPath(next) ?? "/";
   return (
     <>
       <h1 className="mb-4 text-2xl font-bold">Sign in</h1>

@@ -16,8 +16,15 @@ export function SampleRuns({ serial, runs }: { serial: string; runs: RunView[] }
               Run tested {formatInstant(r.testedAt)}
             </Link>
             <span className="text-ink-600"> · by {r.technicianName} · surface {formatTemperature(r.surfaceTempC)}</span>
+            {r.voidedAt && <span className="ml-2 rounded bg-ink-100 px-1.5 py-0.5 text-xs font-semibold uppercase text-ink-700">Voided</span>}
           </p>
-          {r.flags.length > 0 && <ConditionWarnings run={r} />}
+          {r.voidedAt ? (
+            <p className="text-sm text-ink-600">
+              Voided by {r.voidedByName} on {formatInstant(r.voidedAt)}; it no longer counts. Reason: {r.voidReason}
+            </p>
+          ) : (
+            r.flags.length > 0 && <ConditionWarnings run={r} />
+          )}
         </li>
       ))}
     </ul>

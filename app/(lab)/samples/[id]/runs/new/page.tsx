@@ -1,6 +1,8 @@
 import Link from "next/link";
 import { LocalTime } from "@/components/ui/local-time";
+import { Notice } from "@/components/ui/notice";
 import { requirePageActor } from "@/lib/auth/page-guard";
+import { lockedReason } from "@/lib/signoff/lock";
 import { NewRunForm } from "./_components/new-run-form";
 import { sampleContext } from "./_components/sample-context";
 
@@ -9,6 +11,7 @@ export const metadata = { title: "Record a run" };
 export default async function NewRunPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor(["technician", "lead"]);
   const { sample, submission, limits } = await sampleContext(actor, (await params).id);
+  const locked = await lockedReason(submission.id);
   return (
     <div className="space-y-6">
       <div>
@@ -28,7 +31,7 @@ export default async function NewRunPage({ params }: { params: Promise<{ id: str
           the edition asks for at least {limits.minAcclimationH} h in the test room before the test.
         </p>
       </div>
-      <NewRunForm sampleId={sample.id} limits={limits} />
+      {locked ? <Notice>{locked} No run can be recorded until then.</Notice> : <NewRunForm sampleId={sample.id} limits={limits} />}
     </div>
   );
 }
