@@ -9,13 +9,13 @@ import { findClip, type ClipRow } from "./queries";
 
 // Clips are lab evidence: staff read them; manufacturers see results and reports, not recordings.
 
-export async function visibleRunForClips(actor: Actor, q: Db, runId: string): Promise<{ runId: string; submissionId: string }> {
+export async function visibleRunForClips(actor: Actor, q: Db, runId: string): Promise<{ runId: string; submissionId: string; voidedAt: Date | null }> {
   assertStaff(actor, "run");
   const run = await findRun(q, runId);
   if (!run) throw new AppError("not_found", "No such run.");
   const sample = (await findSample(q, run.sampleId))!;
   const submission = (await findSubmission(q, sample.submissionId))!;
-  return { runId, submissionId: submission.id };
+  return { runId, submissionId: submission.id, voidedAt: run.voidedAt };
 }
 
 export async function visibleClip(actor: Actor, q: Db, clipId: string, opts: { lock?: boolean } = {}): Promise<ClipRow> {

@@ -21,8 +21,9 @@ type In<T extends z.ZodType> = z.output<T>;
  * A file that cannot be accepted from its size alone is kept on record as rejected, with the reason.
  */
 export async function startUpload(actor: Actor, runId: string, v: In<typeof startUploadSchema>) {
-  const { submissionId } = await visibleRunForClips(actor, db(), runId);
+  const { submissionId, voidedAt } = await visibleRunForClips(actor, db(), runId);
   assertCanEditIntake(actor);
+  if (voidedAt) throw new AppError("conflict", "This run is voided: it no longer counts and takes no new recordings. Record a new run for the ball and upload there.");
   // A signed-off submission takes no new evidence until a lead re-opens it; refused before any storage is touched.
   await assertUnlocked(db(), submissionId);
   const max = env().CLIP_MAX_BYTES;

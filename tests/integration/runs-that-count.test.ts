@@ -178,6 +178,9 @@ describe("voiding a run", () => {
     expect(await queued()).toEqual(expect.arrayContaining(placed.dropIds));
     await json(await voidRun(lead, placed.runId, "The clip shows another ball's test."), 200);
     expect((await queued()).filter((id) => placed.dropIds.includes(id))).toEqual([]);
+    // Nor does it take new recordings: the upload is refused before anything is stored.
+    const start = await lead.post(`/api/runs/${placed.runId}/clips`, { fileName: "late.mp4", contentType: "video/mp4", size: 1000 });
+    expect(await message(start, 409)).toMatch(/voided.*Record a new run/);
   });
 
   it("the submission shows each run's void, with who, when and why", async () => {
