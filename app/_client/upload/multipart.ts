@@ -129,6 +129,7 @@ async function sendMissing(o: SendOptions, s: UploadState): Promise<void> {
       if (halt.signal.aborted) throw pausedError(); // paused while this part waited for another try
       try {
         sending.add(n);
+        emit();
         const url = await urls.get(n, queue);
         const etag = await o.transport.put(url, body, (b) => (inFlight.set(n, b), emit()), stop.signal);
         await o.transport.record(o.clipId, n, etag, body.size);

@@ -35,16 +35,17 @@ export function useUploads(runId: string) {
       const ctl = { stop: new AbortController(), pause: new AbortController() };
       controllers.current.set(key, ctl);
       const meter = new SpeedMeter();
-      let drawn = { at: 0, parts: -1, phase: "", waiting: "" };
+      let drawn = { at: 0, parts: -1, inFlight: -1, phase: "", waiting: "" };
       const seen: { last: Progress | null } = { last: null };
       const onProgress = (p: Progress) => {
         seen.last = p;
         const now = performance.now();
         meter.add(now, p.sentBytes);
         const waiting = JSON.stringify(p.waiting);
-        // Progress events come many times a second: redraw a few times a second, and at every part.
-        if (now - drawn.at < REDRAW_MS && p.partsDone === drawn.parts && p.phase === drawn.phase && waiting === drawn.waiting) return;
-        drawn = { at: now, parts: p.partsDone, phase: p.phase, waiting };
+        // Progress events come many times a second: redraw a few times a second, and at every part started or stored.
+        const same = p.partsDone === drawn.parts && p.partsInFlight === drawn.inFlight && p.phase === drawn.phase && waiting === drawn.waiting;
+        if (now - drawn.at < REDRAW_MS && same) return;
+        drawn = { at: now, parts: p.partsDone, inFlight: p.partsInFlight, phase: p.phase, waiting };
         patch(key, {
           stage: p.phase === "completing" ? "completing" : ctl.pause.signal.aborted ? "pausing" : "sending",
           sentBytes: p.sentBytes,
