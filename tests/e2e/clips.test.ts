@@ -122,7 +122,7 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     // Pause waits for the parts in flight, which the route holds back: "Stop now" drops them, and says so first.
     await row.getByText(/^Pausing: finishing the 3 parts in flight/).waitFor();
     await screenshot(page, "clips-pausing");
-    await row.getByRole("button", { name: /^Stop now: .* in flight is dropped and sent again on Resume/ }).click();
+    await row.getByRole("button", { name: /^Stop now: drop the 3 parts in flight \(.* sent\); Resume sends them again/ }).click();
     await row.getByText("Paused. 1 of 4 parts are stored on the server; Resume sends the rest.").waitFor();
     await screenshot(page, "clips-paused");
     const { id } = await clipNamed(name);

@@ -20,10 +20,10 @@ export function PauseControls({ job, uploads, named }: { job: UploadJob; uploads
     return (
       <div className="space-y-2">
         <p role="status" className="text-sm text-ink-800">
-          Pausing: finishing {parts(job.partsInFlight)} so that nothing sent is lost ({formatBytes(inFlightSent)} of them sent so far); no new part is started.
+          Pausing: finishing {parts(job.partsInFlight)} ({formatBytes(inFlightSent)} sent so far) so that nothing sent is lost; no new part is started.
         </p>
         <Button type="button" kind="secondary" onClick={() => uploads.stopNow(job.key)} disabled={job.partsInFlight === 0}>
-          Stop now: {formatBytes(inFlightSent)} in flight is dropped and sent again on Resume{named}
+          Stop now: drop {parts(job.partsInFlight)} ({formatBytes(inFlightSent)} sent); Resume sends {job.partsInFlight === 1 ? "it" : "them"} again{named}
         </Button>
       </div>
     );
