@@ -2,6 +2,7 @@
 
 import { useCallback, useEffect, useImperativeHandle, useRef, useState } from "react";
 import { KeyMapDialog } from "./key-map-dialog";
+import { MARK_REASONS, markCheck } from "./mark-rule";
 import { PictureTools } from "./picture-tools";
 import { PlayerControls } from "./player-controls";
 import { PlayerPicture } from "./player-picture";
@@ -15,7 +16,7 @@ import { useFrameSeeker } from "./use-frame-seeker";
 import { usePlayerKeys } from "./use-player-keys";
 import { useVideoEngine } from "./use-video-engine";
 
-export type { FrameChange, FramePlayerControl, FramePlayerProps, PlayerMark } from "./types";
+export type { FrameChange, FramePlayerControl, FramePlayerProps, MarkCheck, PlayerMark } from "./types";
 
 const NOT_MATCHED = "The picture on screen could not be matched to a frame of the index; marks are off until it is.";
 
@@ -63,15 +64,23 @@ export default function FramePlayer(props: FramePlayerProps) {
 
   useImperativeHandle(
     props.controlRef,
-    () => ({
-      confirmedFrame: () => {
+    () => {
+      const check = () => {
         const s = seekerRef.current?.current;
-        return s && (s.status === "confirmed" || s.status === "playing") ? s.frame : null;
-      },
-      goToFrame: (f: number) => seekerRef.current?.seek(f),
-      focus: focusSurface,
-    }),
-    [seekerRef, focusSurface],
+        const video = engine.video;
+        return s && video ? markCheck({ status: s.status, frame: s.frame, paused: video.paused }) : ({ ok: false, reason: MARK_REASONS.loading } as const);
+      };
+      return {
+        confirmedFrame: () => {
+          const c = check();
+          return c.ok ? c.frame : null;
+        },
+        markCheck: check,
+        goToFrame: (f: number) => seekerRef.current?.seek(f),
+        focus: focusSurface,
+      };
+    },
+    [seekerRef, focusSurface, engine.video],
   );
 
   return (

@@ -37,6 +37,7 @@ export class FrameSeeker {
   ) {
     this.tolerance = matchTolerance(times);
     video.addEventListener("pause", this.onPause);
+    video.addEventListener("play", this.onPlay);
   }
 
   get current(): SeekerState {
@@ -55,11 +56,7 @@ export class FrameSeeker {
 
   play(): void {
     if (this.disposed || this.playing) return;
-    this.pending = null;
-    this.playing = true;
-    this.onScreen = null;
-    this.emit({ status: "playing", frame: null, target: this.state.target });
-    this.follow();
+    this.startPlaying();
     this.video.play().catch(() => {
       // Refused (e.g. no data yet): stay where we were, and prove it again.
       this.playing = false;
@@ -75,6 +72,7 @@ export class FrameSeeker {
     this.disposed = true;
     this.stopFollowing();
     this.video.removeEventListener("pause", this.onPause);
+    this.video.removeEventListener("play", this.onPlay);
   }
 
   private emit(s: SeekerState) {
@@ -154,6 +152,19 @@ export class FrameSeeker {
       this.playing = false;
       this.video.pause();
     }
+  }
+
+  /** Played by something else (the browser's media keys, its own controls): follow it like our own play. */
+  private onPlay = () => {
+    if (!this.playing && !this.disposed) this.startPlaying();
+  };
+
+  private startPlaying() {
+    this.pending = null;
+    this.playing = true;
+    this.onScreen = null;
+    this.emit({ status: "playing", frame: null, target: this.state.target });
+    this.follow();
   }
 
   /** Paused by anything (the end of the clip, the engine): land exactly on the frame last seen. */

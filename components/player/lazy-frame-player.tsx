@@ -12,4 +12,4 @@ export const FramePlayer = dynamic(() => import("./frame-player"), {
   ),
 });
 
-export type { FrameChange, FramePlayerControl, FramePlayerProps, PlayerMark } from "./types";
+export type { FrameChange, FramePlayerControl, FramePlayerProps, MarkCheck, PlayerMark } from "./types";

@@ -1,7 +1,8 @@
 import type { ReactNode, Ref } from "react";
 import type { PlayerStatus } from "./frame-seeker";
+import type { MarkCheck } from "./mark-rule";
 
-export type { PlayerStatus };
+export type { MarkCheck, PlayerStatus };
 
 export interface PlayerMark {
   frame: number;
@@ -27,8 +28,10 @@ export interface PlayerKey {
 
 /** What a caller may ask of a mounted player through `controlRef`. */
 export interface FramePlayerControl {
-  /** The frame proven to be on screen now, or null while seeking, playing unmatched or unconfirmed. */
+  /** The paused frame proven to be on screen now, or null while loading, seeking, playing or unconfirmed. */
   confirmedFrame(): number | null;
+  /** Whether a mark may be saved now (`markCheck` in mark-rule.ts): the frame, or why not in words. */
+  markCheck(): MarkCheck;
   goToFrame(frame: number): void;
   focus(): void;
 }
@@ -36,8 +39,10 @@ export interface FramePlayerControl {
 export interface FrameChange {
   /** The frame on screen when known; null while seeking or when the picture is not matched. */
   frame: number | null;
-  /** True only when the picture was matched to `frame` of the index: marks may be saved. */
+  /** True only on a paused frame matched to `frame` of the index: marks may be saved. */
   confirmed: boolean;
+  /** Why marks may not be saved now, in words (null when they may). */
+  refusal: string | null;
 }
 
 export interface FramePlayerProps {

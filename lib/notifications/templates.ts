@@ -11,19 +11,29 @@ export interface MailContent {
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 const FOOT = "The governing specification and the testing laboratory's own accredited procedure decide; Wickmark's limits and defaults are examples.";
-const PREFS = (appUrl: string) => `You can switch off the optional notices at ${appUrl}/account.`;
 
-/** A paragraph, or a list (an array) of short lines. */
-type Para = string | string[];
+interface Link {
+  href: string;
+  label: string;
+}
 
-function build(kind: MailKind, subject: string, paras: Para[], link: { href: string; label: string } | null, appUrl: string): MailContent {
-  const asText = (p: Para) => (Array.isArray(p) ? p.map((l) => `- ${l}`).join("\n") : p);
-  const asHtml = (p: Para) => (Array.isArray(p) ? `<ul>${p.map((l) => `<li>${esc(l)}</li>`).join("")}</ul>` : `<p>${esc(p)}</p>`);
-  const textParts = [...paras.map(asText), ...(link ? [`${link.label}: ${link.href}`] : []), "", FOOT, PREFS(appUrl)];
+/** A paragraph, a list (an array) of short lines, or a link. */
+type Para = string | string[] | Link;
+
+// In the plain text a link ends its line with nothing after it: a mail client links everything up
+// to the next space, so a full stop or comma glued to the address would be taken into the link.
+const linkText = (l: Link) => `${l.label}: ${l.href}`;
+const linkHtml = (l: Link) => `<a href="${esc(l.href)}">${esc(l.label)}</a>`;
+const prefs = (appUrl: string): Link => ({ href: `${appUrl}/account`, label: "your account page" });
+
+function build(kind: MailKind, subject: string, paras: Para[], link: Link | null, appUrl: string): MailContent {
+  const asText = (p: Para) => (typeof p === "string" ? p : Array.isArray(p) ? p.map((l) => `- ${l}`).join("\n") : linkText(p));
+  const asHtml = (p: Para) => (typeof p === "string" ? `<p>${esc(p)}</p>` : Array.isArray(p) ? `<ul>${p.map((l) => `<li>${esc(l)}</li>`).join("")}</ul>` : `<p>${linkHtml(p)}</p>`);
+  const all = link ? [...paras, link] : paras;
+  const textParts = [...all.map(asText), "", FOOT, `You can switch off the optional notices on ${linkText(prefs(appUrl))}`];
   const html = [
-    ...paras.map(asHtml),
-    ...(link ? [`<p><a href="${esc(link.href)}">${esc(link.label)}</a></p>`] : []),
-    `<p style="color:#555;font-size:90%">${esc(FOOT)} ${esc(PREFS(appUrl))}</p>`,
+    ...all.map(asHtml),
+    `<p style="color:#555;font-size:90%">${esc(FOOT)} You can switch off the optional notices on ${linkHtml(prefs(appUrl))}.</p>`,
   ].join("");
   return { kind, subject, text: textParts.join("\n\n"), html };
 }
@@ -60,7 +70,7 @@ export function samplesRequestedMail(o: { appUrl: string; submissionId: string; 
 export function resultsReleasedMail(o: { appUrl: string; submissionId: string; reference: string; modelName: string; revision: number }): MailContent {
   const rev = o.revision > 1 ? ` (revision ${o.revision})` : "";
   return build("results.released", `${o.reference} ${o.modelName}: results released${rev}`,
-    [`A lead has reviewed and released the results of ${o.modelName} (submission ${o.reference})${rev}.`, `The test report: ${o.appUrl}/api/submissions/${o.submissionId}/report.pdf`],
+    [`A lead has reviewed and released the results of ${o.modelName} (submission ${o.reference})${rev}.`, { label: "The test report (PDF)", href: `${o.appUrl}/api/submissions/${o.submissionId}/report.pdf` }],
     { href: `${o.appUrl}/portal/submissions/${o.submissionId}`, label: "See the results in the portal" }, o.appUrl);
 }
 

@@ -5,7 +5,7 @@ import path from "node:path";
 import { pipeline } from "node:stream/promises";
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { clipObjectKey } from "@/lib/clips/rules";
+import { clipObjectKey, formatBytes } from "@/lib/clips/rules";
 import type { ClipView } from "@/lib/clips/view";
 import { closeDb, db } from "@/lib/db";
 import { listOrganisations } from "@/lib/organisations/queries";
@@ -120,6 +120,10 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     await row.getByRole("button", { name: `Upload whole file ${name}` }).click();
     await row.getByText("1 of 4 parts stored").waitFor({ timeout: 20_000 });
     await row.getByRole("button", { name: `Pause ${name}` }).click();
+    // Pause waits for the parts in flight, which the route holds back: "Stop now" drops them, and says so first.
+    await row.getByText(/^Pausing: finishing the 3 parts in flight/).waitFor();
+    await screenshot(page, "clips-pausing");
+    await row.getByRole("button", { name: /^Stop now: drop the 3 parts in flight \(.* sent\); Resume sends them again/ }).click();
     await row.getByText("Paused. 1 of 4 parts are stored on the server; Resume sends the rest.").waitFor();
     await screenshot(page, "clips-paused");
     const { id } = await clipNamed(name);
@@ -144,6 +148,41 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     await page.reload();
     await recordings.getByRole("link", { name }).waitFor();
     expect(await recordings.getByRole("button", { name: `Resume upload of ${name}` }).count()).toBe(0);
+  });
+
+  it("pausing finishes the parts in flight: what was sent stays stored and shown, and no new part starts", async () => {
+    const { file, size } = sizedMp4(16, `clips-e2e-pause-${Date.now()}.mp4`);
+    const name = path.basename(file);
+    const { page, recordings } = await technicianOnRun();
+    // The first three parts (all three lanes) wait at the storage door until the pause is pressed.
+    let release: () => void = () => {};
+    const gate = new Promise<void>((r) => (release = r));
+    const started: number[] = [];
+    await page.route(/[?&]partNumber=\d+(&|$)/, async (route) => {
+      if (route.request().method() !== "PUT") return route.continue();
+      started.push(Number(/partNumber=(\d+)/.exec(route.request().url())![1]));
+      await gate;
+      await route.continue();
+    });
+    await recordings.getByLabel("Video files to upload").setInputFiles(file);
+    const row = recordings.getByRole("article", { name: new RegExp(name.replace(/\./g, "\\.")) });
+    await row.getByRole("button", { name: `Upload whole file ${name}` }).click();
+    await expect.poll(() => started.length, { timeout: 20_000 }).toBe(3);
+    await row.getByText("Pause finishes the 3 parts in flight first and keeps every stored part; no new part is started until you resume.").waitFor();
+    await row.getByRole("button", { name: `Pause ${name}` }).click();
+    await row.getByText(/^Pausing: finishing the 3 parts in flight/).waitFor();
+    release();
+    await row.getByText("Paused. 3 of 4 parts are stored on the server; Resume sends the rest.").waitFor({ timeout: 30_000 });
+    // The bar keeps what the three parts sent: 15 MB, not what was stored before they finished.
+    await row.getByText(new RegExp(`^${formatBytes(15 * 1024 * 1024).replace(".", "\\.")} of ${formatBytes(size).replace(".", "\\.")}`)).waitFor();
+    await screenshot(page, "clips-paused-in-flight-kept");
+    expect(started.sort()).toEqual([1, 2, 3]);
+    const { id } = await clipNamed(name);
+    const kept = await (await lead.get(`/api/clips/${id}/upload`)).json();
+    expect(kept.parts.map((p: { partNumber: number }) => p.partNumber).sort()).toEqual([1, 2, 3]);
+    await row.getByRole("button", { name: `Resume ${name}` }).click();
+    await row.getByText("Stored in full.").waitFor({ timeout: 30_000 });
+    expect(started.sort()).toEqual([1, 2, 3, 4]);
   });
 
   it("trims in the browser to the chosen window, and the stored clip holds exactly those frames", async () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isAbort, PartError, sendFile, type Network, type Transport, type UploadState } from "@/app/_client/upload/multipart";
+import { isAbort, PartError, sendFile, type Network, type Progress, type Transport, type UploadState } from "@/app/_client/upload/multipart";
 import { SignedUrls } from "@/app/_client/upload/signed-urls";
 import { SpeedMeter } from "@/app/_client/upload/speed";
 
@@ -8,6 +8,7 @@ function fakeServer(size: number, partSize: number, opts: { recorded?: number[];
   const partCount = Math.ceil(size / partSize);
   const recorded = new Map<number, number>((opts.recorded ?? []).map((n) => [n, Math.min(partSize, size - (n - 1) * partSize)]));
   const puts: number[] = [];
+  const started: number[] = [];
   const signed: number[][] = [];
   const tries = new Map<number, number>();
   let inFlight = 0;
@@ -21,6 +22,7 @@ function fakeServer(size: number, partSize: number, opts: { recorded?: number[];
     },
     put: async (url, body, onSent, signal) => {
       const n = Number(url.split("/").pop());
+      started.push(n);
       const attempt = (tries.get(n) ?? 0) + 1;
       tries.set(n, attempt);
       inFlight++;
@@ -48,7 +50,7 @@ function fakeServer(size: number, partSize: number, opts: { recorded?: number[];
       return { status: "processing" };
     },
   };
-  return { transport, recorded, puts, signed, tries, get maxInFlight() { return maxInFlight; }, get completed() { return completed; } };
+  return { transport, recorded, puts, started, signed, tries, get maxInFlight() { return maxInFlight; }, get completed() { return completed; } };
 }
 
 const file = (bytes: number) => new Blob([new Uint8Array(bytes)]);
@@ -111,7 +113,7 @@ describe("sendFile", () => {
     expect(s.completed).toBe(true);
   });
 
-  it("pauses on abort: parts in flight are dropped, recorded ones stay, and a new start sends the rest", async () => {
+  it("stopping (leaving the page) drops the parts in flight, keeps the recorded ones, and a new start sends the rest", async () => {
     const s = fakeServer(40, 5);
     const ctl = new AbortController();
     const run = sendFile({ clipId: "c", file: file(40), transport: s.transport, signal: ctl.signal, onProgress: (p) => p.partsDone >= 2 && ctl.abort() });
@@ -124,6 +126,58 @@ describe("sendFile", () => {
     await sendFile({ clipId: "c", file: file(40), transport: s.transport, signal: new AbortController().signal });
     expect(s.recorded.size).toBe(8);
     expect(s.completed).toBe(true);
+  });
+
+  it("pausing starts no new part and finishes the parts in flight: everything sent is stored, and a new start sends the rest", async () => {
+    const s = fakeServer(40, 5);
+    const pause = new AbortController();
+    const seen: Progress[] = [];
+    let startedAtPause = -1;
+    const err = await sendFile({
+      clipId: "c",
+      file: file(40),
+      transport: s.transport,
+      signal: new AbortController().signal,
+      pause: pause.signal,
+      onProgress: (p) => {
+        seen.push(p);
+        if (p.partsDone >= 2 && !pause.signal.aborted) {
+          startedAtPause = s.started.length;
+          expect(p.partsInFlight).toBeGreaterThan(0);
+          pause.abort();
+        }
+      },
+    }).catch((e) => e);
+    expect(isAbort(err)).toBe(true);
+    expect(startedAtPause).toBeGreaterThan(2);
+    expect(s.started.length).toBe(startedAtPause);
+    expect(s.recorded.size).toBe(startedAtPause);
+    // What the last report says is stored is all that was sent, and it never went down on the way.
+    const last = seen.at(-1)!;
+    expect([last.storedBytes, last.sentBytes, last.partsInFlight]).toEqual([startedAtPause * 5, startedAtPause * 5, 0]);
+    const stored = seen.map((p) => p.storedBytes);
+    expect(stored).toEqual([...stored].sort((a, b) => a - b));
+    await sendFile({ clipId: "c", file: file(40), transport: s.transport, signal: new AbortController().signal });
+    expect(s.puts.length).toBe(8);
+    expect(s.completed).toBe(true);
+  });
+
+  it("pausing ends a wait for another try at once, keeps the stored parts, and leaves the failed part for the next start", { timeout: 2000 }, async () => {
+    const s = fakeServer(15, 5, { failPut: (n, attempt) => (n === 2 && attempt === 1 ? new PartError("Storage answered 503 to a part.", true, 503) : null) });
+    const pause = new AbortController();
+    const err = await sendFile({
+      clipId: "c",
+      file: file(15),
+      transport: s.transport,
+      signal: new AbortController().signal,
+      pause: pause.signal,
+      backoffMs: () => 60_000,
+      onProgress: (p) => p.waiting?.kind === "retry" && pause.abort(),
+    }).catch((e) => e);
+    expect(isAbort(err)).toBe(true);
+    expect([...s.recorded.keys()].sort()).toEqual([1, 3]);
+    expect(s.tries.get(2)).toBe(1);
+    expect(s.completed).toBe(false);
   });
 
   it("refuses a file of another size than the one started", async () => {

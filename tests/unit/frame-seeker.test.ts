@@ -71,6 +71,15 @@ describe("frame seeker", () => {
     expect(seeker.current).toEqual({ status: "confirmed", frame: 10, target: 10 });
   });
 
+  it("follows a play it did not start (the browser's media keys): the frame is no longer confirmed", async () => {
+    seeker.seek(10);
+    await vi.advanceTimersByTimeAsync(25);
+    expect(seeker.current.status).toBe("confirmed");
+    video.paused = false;
+    video.dispatchEvent(new Event("play"));
+    expect(seeker.current).toEqual({ status: "playing", frame: null, target: 10 });
+  });
+
   it("says unconfirmed when the browser paints another frame", async () => {
     video.paint = () => times[11];
     seeker.seek(10);

@@ -6,6 +6,7 @@ export type Stage =
   | "trimming"
   | "starting"
   | "sending"
+  | "pausing" // no new part starts; the parts in flight are finished and stored
   | "paused"
   | "completing"
   | "processing" // stored; the server's jobs take it from here
@@ -17,6 +18,10 @@ export interface UploadJob {
   stage: Stage;
   clipId: string | null;
   sentBytes: number;
+  /** Recorded by the server: never lost by a pause or a stop. */
+  storedBytes: number;
+  /** Parts being sent now (finished by a pause, dropped by "stop now"). */
+  partsInFlight: number;
   partsDone: number;
   partCount: number;
   speed: number | null;
@@ -45,6 +50,8 @@ export function newJob(file: File, over: Partial<UploadJob> = {}): UploadJob {
     stage: "picked",
     clipId: null,
     sentBytes: 0,
+    storedBytes: 0,
+    partsInFlight: 0,
     partsDone: 0,
     partCount: 0,
     speed: null,
@@ -71,4 +78,4 @@ export function jobsReducer(jobs: UploadJob[], a: JobAction): UploadJob[] {
 }
 
 /** Stages in which the engine is working on the job (Pause makes sense). */
-export const isActive = (s: Stage) => s === "starting" || s === "sending" || s === "completing";
+export const isActive = (s: Stage) => s === "starting" || s === "sending" || s === "pausing" || s === "completing";

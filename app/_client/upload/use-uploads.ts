@@ -16,7 +16,8 @@ const words = (e: unknown) => (e instanceof Error ? e.message : "The upload stop
 export function useUploads(runId: string) {
   const [jobs, dispatch] = useReducer(jobsReducer, []);
   const jobsNow = useRef(jobs);
-  const controllers = useRef(new Map<string, AbortController>());
+  // Per upload: `stop` drops the parts in flight (leaving, removing, "stop now"); `pause` lets them finish.
+  const controllers = useRef(new Map<string, { stop: AbortController; pause: AbortController }>());
   // Keeping a large file in IndexedDB takes a while: sending does not wait for it, finishing does.
   const keeping = useRef(new Map<string, Promise<boolean>>());
   const starting = useRef(new Set<string>());
@@ -25,29 +26,32 @@ export function useUploads(runId: string) {
     jobsNow.current = jobs;
   }, [jobs]);
   // Leaving the page stops the requests; the parts already recorded stay, and the upload can be resumed.
-  useEffect(() => () => controllers.current.forEach((c) => c.abort()), []);
+  useEffect(() => () => controllers.current.forEach((c) => c.stop.abort()), []);
 
   const patch = useCallback((key: string, p: Partial<UploadJob>) => dispatch({ type: "patch", key, patch: p }), []);
 
   const send = useCallback(
     async (key: string, clipId: string, file: File) => {
       if (controllers.current.has(key)) return;
-      const ctl = new AbortController();
+      const ctl = { stop: new AbortController(), pause: new AbortController() };
       controllers.current.set(key, ctl);
       const meter = new SpeedMeter();
-      let drawn = { at: 0, parts: -1, phase: "", waiting: "" };
+      let drawn = { at: 0, parts: -1, inFlight: -1, phase: "", waiting: "" };
       const seen: { last: Progress | null } = { last: null };
       const onProgress = (p: Progress) => {
         seen.last = p;
         const now = performance.now();
         meter.add(now, p.sentBytes);
         const waiting = JSON.stringify(p.waiting);
-        // Progress events come many times a second: redraw a few times a second, and at every part.
-        if (now - drawn.at < REDRAW_MS && p.partsDone === drawn.parts && p.phase === drawn.phase && waiting === drawn.waiting) return;
-        drawn = { at: now, parts: p.partsDone, phase: p.phase, waiting };
+        // Progress events come many times a second: redraw a few times a second, and at every part started or stored.
+        const same = p.partsDone === drawn.parts && p.partsInFlight === drawn.inFlight && p.phase === drawn.phase && waiting === drawn.waiting;
+        if (now - drawn.at < REDRAW_MS && same) return;
+        drawn = { at: now, parts: p.partsDone, inFlight: p.partsInFlight, phase: p.phase, waiting };
         patch(key, {
-          stage: p.phase === "completing" ? "completing" : "sending",
+          stage: p.phase === "completing" ? "completing" : ctl.pause.signal.aborted ? "pausing" : "sending",
           sentBytes: p.sentBytes,
+          storedBytes: p.storedBytes,
+          partsInFlight: p.partsInFlight,
           partsDone: p.partsDone,
           partCount: p.partCount,
           speed: meter.bytesPerSecond(),
@@ -57,14 +61,15 @@ export function useUploads(runId: string) {
       };
       patch(key, { stage: "sending", error: null, waiting: null, speed: null, secondsLeft: null });
       try {
-        await sendFile({ clipId, file, transport: browserTransport, network: browserNetwork, signal: ctl.signal, onProgress });
+        await sendFile({ clipId, file, transport: browserTransport, network: browserNetwork, signal: ctl.stop.signal, pause: ctl.pause.signal, onProgress });
         await keeping.current.get(clipId);
         await removePending(clipId);
         patch(key, { stage: "processing", sentBytes: file.size, waiting: null });
       } catch (e) {
-        // What was in flight is lost on a pause: the bar goes back to what the server holds.
-        const stored = seen.last ? { sentBytes: seen.last.storedBytes, partsDone: seen.last.partsDone } : {};
-        patch(key, { stage: "paused", waiting: null, speed: null, secondsLeft: null, error: isAbort(e) ? null : words(e), ...stored });
+        // A pause finished the parts in flight, so this is all that was sent; after "stop now" the
+        // bar goes back to what the server holds, as the button said it would.
+        const stored = seen.last ? { sentBytes: seen.last.storedBytes, storedBytes: seen.last.storedBytes, partsDone: seen.last.partsDone } : {};
+        patch(key, { stage: "paused", waiting: null, speed: null, secondsLeft: null, partsInFlight: 0, error: isAbort(e) ? null : words(e), ...stored });
       } finally {
         controllers.current.delete(key);
         refresh();
@@ -112,7 +117,19 @@ export function useUploads(runId: string) {
     [keep, patch, refresh, runId, send],
   );
 
-  const pause = useCallback((key: string) => controllers.current.get(key)?.abort(), []);
+  /** Starts no new part; the parts in flight are finished and stored, then the upload is paused. */
+  const pause = useCallback(
+    (key: string) => {
+      const c = controllers.current.get(key);
+      if (!c || c.pause.signal.aborted) return;
+      c.pause.abort();
+      patch(key, { stage: "pausing", speed: null, secondsLeft: null });
+    },
+    [patch],
+  );
+
+  /** Pauses at once: the parts in flight are dropped and sent again on Resume. */
+  const stopNow = useCallback((key: string) => controllers.current.get(key)?.stop.abort(), []);
 
   const resume = useCallback(
     (key: string) => {
@@ -136,11 +153,11 @@ export function useUploads(runId: string) {
   );
 
   const dismiss = useCallback((key: string) => {
-    controllers.current.get(key)?.abort();
+    controllers.current.get(key)?.stop.abort();
     dispatch({ type: "remove", key });
   }, []);
 
-  return { jobs, add, start, pause, resume, adopt, dismiss };
+  return { jobs, add, start, pause, stopNow, resume, adopt, dismiss };
 }
 
 export type Uploads = ReturnType<typeof useUploads>;

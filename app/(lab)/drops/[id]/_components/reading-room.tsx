@@ -1,9 +1,10 @@
 "use client";
 
-import { useMemo, useRef, useState } from "react";
+import { useMemo, useRef } from "react";
 import { useClip, useFrameIndex } from "@/app/_client/clips";
 import { useDrop, useSaveMarks, type DropView } from "@/app/_client/drops";
-import { FramePlayer, type FrameChange, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
+import { FramePlayer, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
+import { MarkStatus, markButtonProps, useMarkGate } from "@/components/player/mark-gate";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { DropHeader } from "./drop-header";
@@ -27,8 +28,8 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
   const clipId = q.data?.clip?.id ?? "";
   const clip = useClip(clipId, Boolean(clipId));
   const frames = useFrameIndex(clipId, Boolean(clipId) && q.data?.clip?.status === "ready");
-  const [seen, setSeen] = useState<FrameChange>({ frame: null, confirmed: false });
   const control = useRef<FramePlayerControl>(null);
+  const gate = useMarkGate(control);
   const drop = q.data;
   const save = useSaveMarks(id, drop?.myDraft?.id ?? null);
   const marks = useMemo(() => (drop ? marksOf(drop) : []), [drop]);
@@ -39,8 +40,7 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
   const settled = d.state !== null && !["unread", "read once"].includes(d.state);
   const canMark = canRead && d.clip?.status === "ready" && (d.myDraft !== null || (!d.mySubmitted && !settled));
   const mark = (which: "dispenseFrame" | "clearFrame") => {
-    const frame = control.current?.confirmedFrame() ?? null;
-    if (frame !== null) save.mutate({ [which]: frame });
+    if (!save.isPending) gate.attempt(which === "dispenseFrame" ? "Dispense" : "Clear", (frame) => save.mutate({ [which]: frame }));
   };
   const markKeys = canMark
     ? [
@@ -67,14 +67,15 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
               initialFrame={d.myDraft?.dispenseFrame ?? d.startFrame ?? 0}
               marks={marks}
               filmstrip={clip.data.filmstrip}
-              onFrameChange={setSeen}
+              onFrameChange={gate.onFrameChange}
               extraKeys={markKeys}
               controlRef={control}
             >
               {canMark && (
                 <>
-                  <Button disabled={!seen.confirmed || save.isPending} onClick={() => mark("dispenseFrame")}>Mark dispense (D)</Button>
-                  <Button disabled={!seen.confirmed || save.isPending} onClick={() => mark("clearFrame")}>Mark clear (E)</Button>
+                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("dispenseFrame")}>Mark dispense (D)</Button>
+                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("clearFrame")}>Mark clear (E)</Button>
+                  <MarkStatus refused={gate.refused} />
                 </>
               )}
             </FramePlayer>

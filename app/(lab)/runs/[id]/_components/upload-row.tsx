@@ -6,6 +6,7 @@ import { formatBytes } from "@/lib/clips/rules";
 import { canTrimInBrowser, TRIM_MAX_BYTES } from "@/app/_client/trim/trim-rules";
 import { isActive, type UploadJob } from "@/app/_client/upload/upload-jobs";
 import type { Uploads } from "@/app/_client/upload/use-uploads";
+import { PauseControls } from "./pause-controls";
 import { ProcessingStatus } from "./processing-status";
 import { TrimPanel } from "./trim-panel";
 import { UploadProgress } from "./upload-progress";
@@ -63,13 +64,7 @@ export function UploadRow({ job, uploads }: { job: UploadJob; uploads: Uploads }
         {sending && job.stage !== "starting" && (
           <>
             <UploadProgress job={job} />
-            <div className="flex flex-wrap gap-2">
-              {job.stage === "paused" ? (
-                <Button type="button" onClick={() => uploads.resume(job.key)}>Resume{named}</Button>
-              ) : (
-                <Button type="button" kind="secondary" onClick={() => uploads.pause(job.key)} disabled={job.stage === "completing"}>Pause{named}</Button>
-              )}
-            </div>
+            <PauseControls job={job} uploads={uploads} named={named} />
           </>
         )}
 

@@ -6,6 +6,7 @@ import { useClip, useFrameIndex } from "@/app/_client/clips";
 import { useDrop } from "@/app/_client/drops";
 import { useRuling } from "@/app/_client/rulings";
 import { FramePlayer, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
+import { MarkStatus, useMarkGate } from "@/components/player/mark-gate";
 import { Notice } from "@/components/ui/notice";
 import { DropHeader } from "../../_components/drop-header";
 import { ReadingPair } from "./reading-pair";
@@ -19,7 +20,8 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
   const clip = useClip(clipId, Boolean(clipId));
   const frames = useFrameIndex(clipId, Boolean(clipId) && q.data?.clip?.status === "ready");
   const control = useRef<FramePlayerControl>(null);
-  const [choice, setChoice] = useState<Choice>("first");
+  const gate = useMarkGate(control);
+  const [choice, setChoice] = useState<Choice | null>(null);
   const [third, setThird] = useState<ThirdMarks>({ dispenseFrame: null, clearFrame: null });
   const drop = q.data;
   const marks = useMemo<PlayerMark[]>(() => {
@@ -38,10 +40,8 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
   const d = q.data;
   const party = d.readings.some((r) => r.reviewerId === actorId);
   const open = d.state === "discrepancy" && !ruling.data && !party;
-  const markThird = (which: keyof ThirdMarks) => {
-    const f = control.current?.confirmedFrame() ?? null;
-    if (f !== null) setThird((t) => ({ ...t, [which]: f }));
-  };
+  const markThird = (which: keyof ThirdMarks) =>
+    gate.attempt(which === "dispenseFrame" ? "Third reading's dispense" : "Third reading's clear", (f) => setThird((t) => ({ ...t, [which]: f })));
   const keys = open && choice === "third"
     ? [
         { key: "d", label: "Mark the frame on screen as the third reading's dispense frame", run: () => markThird("dispenseFrame") },
@@ -67,8 +67,11 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
           marks={marks}
           filmstrip={clip.data.filmstrip}
           extraKeys={keys}
+          onFrameChange={gate.onFrameChange}
           controlRef={control}
-        />
+        >
+          {keys.length > 0 && <MarkStatus refused={gate.refused} />}
+        </FramePlayer>
       )}
       <section aria-label="Ruling" className="max-w-2xl rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
         {ruling.data && (
