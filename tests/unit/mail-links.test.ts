@@ -14,7 +14,7 @@ const unlinked = (html: string) => html.replace(/<a [^>]*>.*?<\/a>/g, "").replac
 
 const mails: [string, { text: string; html?: string }, string[]][] = [
   ["discrepancy", discrepancyMail({ appUrl: APP, dropId: ID, reference: "D-1", sampleSerial: "S-1", ordinal: 2, differenceS: 1.5 }), [`${APP}/drops/${ID}`, `${APP}/account`]],
-  ["below the limit", belowLimitMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", balls: [{ serial: "S-1", meanS: 12.3 }], limitS: 15 }), [`${APP}/portal/submissions/${ID}`, `${APP}/account`]],
+  ["below the limit", belowLimitMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", judged: "mean", balls: [{ serial: "S-1", value: "12.3 s" }], limit: "15.0 s", decides: true }), [`${APP}/portal/submissions/${ID}`, `${APP}/account`]],
   ["samples requested", samplesRequestedMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", round: 2, count: 3, weight: "15 lb", dueBy: "2027-01-31", note: "Ship in the lab's own boxes." }), [`${APP}/portal/submissions/${ID}`, `${APP}/account`]],
   ["results released", resultsReleasedMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", revision: 2 }), [`${APP}/api/submissions/${ID}/report.pdf`, `${APP}/portal/submissions/${ID}`, `${APP}/account`]],
   ["reviewer digest", reviewerDigestMail({ appUrl: APP, name: "Reader", day: "2026-12-05", waiting: 2, submissions: [{ reference: "D-1", count: 2 }], oldest: null }), [`${APP}/queue`, `${APP}/account`]],
