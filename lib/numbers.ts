@@ -24,3 +24,16 @@ export function digitsAgainst(v: number, thresholds: readonly number[], min = 1)
 export function decimalsOf(v: number): number {
   return (String(v).split(".")[1] ?? "").length;
 }
+
+/** A byte count for people: "56 kB", "1.8 MB". */
+export function formatBytes(n: number): string {
+  if (n < 1024) return `${n} B`;
+  const units = ["kB", "MB", "GB", "TB"];
+  let v = n / 1024;
+  let i = 0;
+  while (v >= 1024 && i < units.length - 1) {
+    v /= 1024;
+    i++;
+  }
+  return `${v.toFixed(v < 10 ? 1 : 0)} ${units[i]}`;
+}

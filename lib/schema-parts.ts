@@ -15,6 +15,9 @@ export const text = (label: string, max = 200) =>
 export const optionalText = (label: string, max = 2000) =>
   z.string().trim().max(max, `${label} must be at most ${max} characters.`).default("");
 
+/** A UUID as the database makes them: the one pattern pages and routes test ids with. */
+export const UUID_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 export const isoDate = (label: string) =>
   z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` });
 

@@ -54,10 +54,6 @@ export async function presignGet(key: string, expiresInSeconds = 900): Promise<s
   return getSignedUrl(s3(), new GetObjectCommand({ Bucket: bucket(), Key: key }), { expiresIn: expiresInSeconds });
 }
 
-export async function presignPut(key: string, contentType: string, expiresInSeconds = 900): Promise<string> {
-  return getSignedUrl(s3(), new PutObjectCommand({ Bucket: bucket(), Key: key, ContentType: contentType }), { expiresIn: expiresInSeconds });
-}
-
 /** SHA-256 of a stream, hex. */
 export async function sha256OfStream(stream: Readable): Promise<string> {
   const hash = createHash("sha256");

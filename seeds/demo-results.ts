@@ -3,7 +3,7 @@ import path from "node:path";
 import type { Knex } from "knex";
 import type { Actor } from "../lib/auth/actor";
 import { listClipsOfRun } from "../lib/clips/queries";
-import { placeDrop } from "../lib/readings/drop-service";
+import { placeDrop } from "../lib/drops/service";
 import { acceptRun, getRun } from "../lib/runs/service";
 import { clipSettled, ingestClipFile } from "../scripts/clips/ingest";
 import { renderSyntheticClip, type Truth } from "../scripts/clips/synth-clip";

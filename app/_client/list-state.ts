@@ -1,5 +1,6 @@
 "use client";
 
+import { UUID_PATTERN } from "@/lib/schema-parts";
 import { usePathname, useSearchParams } from "next/navigation";
 import { useCallback, useMemo } from "react";
 import { KINDS, SORTS, STATUSES, type SubmissionKind, type SubmissionStatus } from "@/lib/submissions/schema";
@@ -24,7 +25,6 @@ export interface ListState {
 
 export const DEFAULT_LIST: ListState = { page: 1, pageSize: 20, sort: "received", dir: "desc" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const DAY = /^\d{4}-\d{2}-\d{2}$/;
 const oneOf = <T extends string>(list: readonly T[], v: string | null): T | undefined => (list as readonly string[]).includes(v ?? "") ? (v as T) : undefined;
 const whole = (v: string | null, min: number, max: number): number | undefined => {
@@ -40,7 +40,7 @@ export function readListState(sp: URLSearchParams): ListState {
     pageSize: whole(sp.get("pageSize"), 5, 100) ?? DEFAULT_LIST.pageSize,
     sort: oneOf(SORTS, sp.get("sort")) ?? DEFAULT_LIST.sort,
     dir: oneOf(["asc", "desc"] as const, sp.get("dir")) ?? DEFAULT_LIST.dir,
-    organisationId: UUID.test(sp.get("organisationId") ?? "") ? sp.get("organisationId")! : undefined,
+    organisationId: UUID_PATTERN.test(sp.get("organisationId") ?? "") ? sp.get("organisationId")! : undefined,
     kind: oneOf(KINDS, sp.get("kind")),
     status: oneOf(STATUSES, sp.get("status")),
     round: whole(sp.get("round"), 1, 1000),

@@ -1,3 +1,4 @@
+import { isBeingRead } from "../drops/states";
 import type { Actor } from "../auth/actor";
 import { hasRole } from "../users/rules";
 import type { AuditListRow } from "./list-queries";
@@ -7,7 +8,6 @@ import type { AuditListRow } from "./list-queries";
 // holds the reviewer role: they could tell one reader what the other marked.
 
 export const HIDDEN = "hidden until both readings are in";
-const UNSETTLED = new Set(["unread", "read once"]);
 
 export interface AuditEventView {
   id: string;
@@ -23,7 +23,7 @@ export interface AuditEventView {
 }
 
 export function isHiddenFor(actor: Actor, e: Pick<AuditListRow, "entity" | "dropState">): boolean {
-  return hasRole(actor, "reviewer") && (e.entity === "reading" || e.entity === "drop") && e.dropState !== null && UNSETTLED.has(e.dropState);
+  return hasRole(actor, "reviewer") && (e.entity === "reading" || e.entity === "drop") && isBeingRead(e.dropState);
 }
 
 export function toAuditEventView(actor: Actor, e: AuditListRow): AuditEventView {

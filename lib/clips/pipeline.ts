@@ -3,7 +3,8 @@ import { enqueue, type QueueKey } from "../jobs";
 import { findClip, finishStep, listSteps, startStep, updateClip, type ClipRow } from "./queries";
 import { STEPS, type Step } from "./rules";
 import { PermanentStepError, type StepOutcome } from "./step-errors";
-import { hashStep, indexStep, verifyStep } from "./steps-inspect";
+import { hashStep, verifyStep } from "./steps-inspect";
+import { indexStep } from "../frame-index/step";
 import { proxyStep, thumbnailsStep } from "./steps-render";
 
 // The processing chain of a clip: verify → hash → index → proxy → thumbnails, one queue each.

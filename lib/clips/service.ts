@@ -3,7 +3,8 @@ import { db } from "../db";
 import { AppError } from "../errors";
 import { presignGet } from "../storage";
 import { visibleClip, visibleRunForClips } from "./access";
-import { findFrameIndex, findFrameIndexSummary, findRendition } from "./index-queries";
+import { findFrameIndex, findFrameIndexSummary } from "../frame-index/queries";
+import { findRendition } from "./rendition-queries";
 import { listClipsOfRun, listSteps, type ClipRow } from "./queries";
 import { toClipView, type ClipView } from "./view";
 

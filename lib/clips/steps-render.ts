@@ -3,13 +3,15 @@ import os from "node:os";
 import path from "node:path";
 import { db } from "../db";
 import { presignGet, putObjectFile } from "../storage";
-import { probePacketTimes } from "../video/ffprobe-packets";
+import { probePacketTimes } from "../frame-index/packets";
 import { buildProxy } from "../video/proxy";
 import { renderThumbnails } from "../video/thumbnails";
-import { findFrameIndex, findRendition, saveProxy, saveThumbnails } from "./index-queries";
+import { findFrameIndex } from "../frame-index/queries";
+import { findRendition, saveProxy, saveThumbnails } from "./rendition-queries";
 import { proxyBuildFailure, proxyGop, proxyMismatch, proxyRefusal } from "./proxy-rules";
 import type { ClipRow } from "./queries";
-import { clipObjectKey, stepsWellInBrowser } from "./rules";
+import { clipObjectKey } from "./object-keys";
+import { stepsWellInBrowser } from "./proxy-rules";
 import { isTransientToolError, PermanentStepError, type StepOutcome } from "./step-errors";
 
 // The steps that write renditions: the stepping proxy and the thumbnails. Work files live in a

@@ -1,7 +1,7 @@
 // What a clip trimmed in the browser really holds of its original, in the original's own seconds.
 // The trim copies packets with their timestamps (ffmpeg -copyts), so the clip's first and last
 // frame times, less the original's start time, are where those frames sat in the original. Pure.
-import type { Rational } from "./rules";
+import type { Rational } from "../frame-index/summary";
 import type { TrimSource } from "./schema";
 
 export interface TrimKept extends TrimSource {

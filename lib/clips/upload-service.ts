@@ -11,7 +11,10 @@ import { assertUnlocked } from "../signoff/lock";
 import { assertCanEditIntake } from "../submissions/policy";
 import { visibleClip, visibleRunForClips } from "./access";
 import { findUpload, insertClip, insertSteps, insertUpload, listParts, markUploadCompleted, updateClip, upsertPart } from "./queries";
-import { clipObjectKey, formatBytes, planParts, STEPS } from "./rules";
+import { clipObjectKey } from "./object-keys";
+import { formatBytes } from "../numbers";
+import { planParts } from "./upload-rules";
+import { STEPS } from "./rules";
 import type { recordPartSchema, startUploadSchema } from "./schema";
 
 type In<T extends z.ZodType> = z.output<T>;

@@ -1,6 +1,6 @@
 // What ffprobe said about an uploaded file, turned into a verdict in words a technician understands.
 import { acceptedInWords, containerName, rawStreamName } from "./media-names";
-import type { Rational } from "./rules";
+import type { Rational } from "../frame-index/summary";
 
 export interface ProbeSummary {
   formatName: string;

@@ -1,4 +1,5 @@
-import type { FrameIndexRow, RenditionRow } from "./index-queries";
+import type { FrameIndexRow } from "../frame-index/queries";
+import type { RenditionRow } from "./rendition-queries";
 import type { ClipRow, StepRow } from "./queries";
 import { STEP_LABELS, STEPS, type ClipStatus, type Step } from "./rules";
 import { trimKept, type TrimKept } from "./trim-provenance";

@@ -1,3 +1,4 @@
+import { UUID_PATTERN } from "../schema-parts";
 import { randomUUID } from "node:crypto";
 import type { z } from "zod";
 import type { Actor } from "../auth/actor";
@@ -89,11 +90,10 @@ export function param(params: Params, name: string): string {
   return Array.isArray(v) ? v.join("/") : v;
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** A uuid path segment; anything else is simply not found (never a database error). */
 export function idParam(params: Params, name: string, what: string): string {
   const v = param(params, name);
-  if (!v || !UUID.test(v)) throw new AppError("not_found", `No such ${what}.`);
+  if (!v || !UUID_PATTERN.test(v)) throw new AppError("not_found", `No such ${what}.`);
   return v.toLowerCase();
 }

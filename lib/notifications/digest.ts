@@ -1,6 +1,6 @@
 import { db } from "../db";
 import { env } from "../env";
-import { listQueueFor } from "../readings/drop-queries";
+import { listQueueFor } from "../drops/queries";
 import { digestDay, summariseWaiting } from "./digest-rules";
 import { listDigestReviewers } from "./digest-queries";
 import { queueMail } from "./outbox";

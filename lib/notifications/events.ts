@@ -1,8 +1,8 @@
 import type { Knex } from "knex";
 import type { Db } from "../db";
 import { env } from "../env";
-import type { DropRow } from "../readings/drop-queries";
-import { SETTLED_STATES } from "../results/queries";
+import type { DropRow } from "../drops/queries";
+import { SETTLED_STATES } from "../drops/states";
 import { loadSubmissionResults } from "../results/service";
 import { decimalsOf } from "../numbers";
 import { judgedThresholds, secsAgainst } from "../results/words";

@@ -1,3 +1,4 @@
+import type { DropState } from "../drops/states";
 import { durationUncertaintyOfMarks } from "../stats/uncertainty";
 
 // A reading's time comes from the clip's own frame timestamps, never from frame number ÷ rate:
@@ -78,8 +79,6 @@ export function compareReadings(
   return { agreed, timeDifferenceS, dispenseDifferenceS, clearDifferenceS, agreedValueS: agreed ? (time(a) + time(b)) / 2 : null };
 }
 
-export const DROP_STATES = ["unread", "read once", "agreed", "discrepancy", "ruled", "signed off"] as const;
-export type DropState = (typeof DROP_STATES)[number];
 
 export interface ChainReading {
   id: string;
@@ -95,6 +94,14 @@ export function currentReadings<R extends ChainReading>(readings: readonly R[]):
   const submitted = readings.filter((r) => r.status === "submitted");
   const replaced = new Set(submitted.map((r) => r.supersedesId).filter((id): id is string => id !== null));
   return submitted.filter((r) => !replaced.has(r.id)).sort((a, b) => a.slot - b.slot);
+}
+
+/**
+ * The same rule on readings as the views send them (each already says whether a correction replaced
+ * it): the submitted readings that count, in slot order. Used by the pages that show a drop.
+ */
+export function countingReadings<R extends { status: string; superseded: boolean; slot?: number | null }>(readings: readonly R[]): R[] {
+  return readings.filter((r) => r.status === "submitted" && !r.superseded).sort((a, b) => (a.slot ?? 0) - (b.slot ?? 0));
 }
 
 /** The ids of submitted readings that a later submitted correction replaced. */

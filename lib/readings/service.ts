@@ -1,11 +1,12 @@
+import { isBeingRead } from "../drops/states";
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
-import { findFrameIndex } from "../clips/index-queries";
+import { findFrameIndex } from "../frame-index/queries";
 import { notifyBelowLimit, notifyDiscrepancy } from "../notifications/events";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
 import { assertDropUnlocked } from "../signoff/lock";
-import { findDrop, findDropOfReadingForUpdate, updateDropOutcome, type DropRow } from "./drop-queries";
+import { findDrop, findDropOfReadingForUpdate, updateDropOutcome, type DropRow } from "../drops/queries";
 import { assertCanSeeDrops, assertReviewer, canSeeReading, isBlindFor } from "./policy";
 import { deleteDraft, findReading, insertReading, listReadingsOfDrop, markSubmitted, updateDraftMarks, type ReadingRow } from "./queries";
 import { currentReadings, dropOutcome, marksFrom, supersededIds, type Marks } from "./rules";
@@ -62,7 +63,7 @@ export async function startReading(actor: Actor, dropId: string, marks: MarksInp
     }
     if (mine.length) throw new AppError("conflict", "You have already read this drop. The other reading must come from another reviewer; to fix your own, record a correction.");
     const heads = readings.filter((r) => r.supersedesId === null);
-    if (heads.length >= 2 || !["unread", "read once"].includes(drop.state)) throw new AppError("conflict", "This drop already has its two readers.");
+    if (heads.length >= 2 || !isBeingRead(drop.state)) throw new AppError("conflict", "This drop already has its two readers.");
     const m = await lookUpMarks(trx, drop, drop.clipId, marks.dispenseFrame ?? null, marks.clearFrame ?? null);
     const slot = heads.some((r) => r.slot === 1) ? 2 : 1;
     const { id } = await insertReading(trx, { dropId, clipId: drop.clipId, reviewerId: actor.id, slot, supersedesId: null, correctionReason: null, ...m });

@@ -1,8 +1,9 @@
 import type { Actor } from "../auth/actor";
-import type { DropRow } from "./drop-queries";
+import type { DropRow } from "../drops/queries";
 import { canSeeReading, isBlindFor } from "./policy";
 import type { ReadingRow } from "./queries";
-import { currentReadings, supersededIds, type DropState } from "./rules";
+import { currentReadings, supersededIds } from "./rules";
+import { type DropState } from "../drops/states";
 
 // What one person sees of a drop and its readings. Every response that carries drops or readings
 // is built here, so the blind rule has one home.

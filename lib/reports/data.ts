@@ -3,7 +3,7 @@ import { db } from "../db";
 import type { EditionRow } from "../editions/queries";
 import { env } from "../env";
 import type { SubmissionDecision } from "../results/decision";
-import { SETTLED_STATES } from "../results/queries";
+import { SETTLED_STATES } from "../drops/states";
 import type { BallResult } from "../results/rules";
 import { loadSubmissionResults } from "../results/service";
 import { listRunsOfSubmission } from "../runs/queries";
@@ -15,7 +15,7 @@ import type { SubmissionRow } from "../submissions/queries";
 import { GRAMS_PER_POUND } from "../units/rules";
 import { assertCanSeeReport } from "./policy";
 import { listReportClips, listReportDrops, type ReportClipRow, type ReportReading } from "./queries";
-import { signOffPart, type SignOffPart } from "./sign-off";
+import { signOffPart, type SignOffPart } from "../signoff/report-part";
 
 // Everything the test report and the exports print, gathered once. The results come from the
 // same loader as the results screen, so the report can never disagree with it.

@@ -1,10 +1,10 @@
+import { SETTLED_STATES } from "../drops/states";
 import type { Db } from "../db";
 import { CURRENT_SUBMITTED_G } from "../readings/queries";
 
 // The settled drops of a submission, with what a result needs from their readings.
 
 /** Drop states whose time counts in a result. */
-export const SETTLED_STATES = ["agreed", "ruled", "signed off"] as const;
 
 export interface ResultDropRow {
   id: string;

@@ -1,10 +1,10 @@
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
-import { findFrameIndex } from "../clips/index-queries";
+import { findFrameIndex } from "../frame-index/queries";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
 import { notifyBelowLimit } from "../notifications/events";
-import { findDrop, type DropRow } from "../readings/drop-queries";
+import { findDrop, type DropRow } from "../drops/queries";
 import { assertDropUnlocked } from "../signoff/lock";
 import { assertCanSeeDrops } from "../readings/policy";
 import { listReadingsOfDrop, type ReadingRow } from "../readings/queries";

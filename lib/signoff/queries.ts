@@ -50,7 +50,7 @@ export async function insertReopening(q: Db, r: { submissionId: string; revision
 }
 
 /** Every drop of the submission's runs moves to a new state (signing off, or back on re-opening). */
-export async function setDropStates(q: Db, submissionId: string, from: string[], to: string): Promise<number> {
+export async function setDropStates(q: Db, submissionId: string, from: readonly string[], to: string): Promise<number> {
   return q("drops")
     .whereIn("state", from)
     .whereIn("run_id", q("runs as r").join("samples as s", "s.id", "r.sample_id").where("s.submission_id", submissionId).select("r.id"))

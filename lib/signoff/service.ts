@@ -1,3 +1,4 @@
+import { SIGNABLE_STATES } from "../drops/states";
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
 import { verifyPassword } from "../auth/password";
@@ -69,7 +70,7 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
     const id = await insertSignature(trx, { submissionId, revision, signedBy: actor.id, results, changes });
     // The snapshot keeps the whole results view; the diff reads only what it needs from it.
     await updateSubmissionRow(trx, submissionId, { status: "released" });
-    await setDropStates(trx, submissionId, ["agreed", "ruled"], "signed off");
+    await setDropStates(trx, submissionId, SIGNABLE_STATES, "signed off");
     await recordChange(trx, actor, { action: "submission.signed_off", entity: "submission", entityId: submissionId, before: { status: s.status }, after: { status: "released", revision, signatureId: id, meaning: "results reviewed and released", changes } });
     await notifyResultsReleased(trx, submissionId, revision);
   });

@@ -1,4 +1,4 @@
-import type { OutgoingMail } from "../mail";
+import type { OutgoingMail } from "../smtp";
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 

@@ -3,7 +3,7 @@ import { recordChange } from "../audit/record";
 import { db, type Db } from "../db";
 import { env } from "../env";
 import { AppError } from "../errors";
-import { sendMail } from "../mail";
+import { sendMail } from "../smtp";
 import { findOrganisation } from "../organisations/queries";
 import { inviteMail } from "./invite-mail";
 import { insertInvite, revokeOpenInvites } from "./invite-queries";

@@ -1,5 +1,5 @@
 import { spawn } from "node:child_process";
-import { probeVideoSize } from "./ffprobe-packets";
+import { probeVideoSize } from "../frame-index/packets";
 import { decodeFrameCode, FRAME_CODE_BITS, frameCodeReadFilter, unwrapFrameCodes } from "./frame-code";
 
 /**

@@ -1,8 +1,9 @@
 // Child process of the benchmark: runs the worker's own code for one step on one local file and
 // reports its time and this process's peak memory as JSON on stdout.
-import { encodePts, summarizeIndex } from "../../lib/clips/rules";
+import { encodePts } from "../../lib/frame-index/pts-codec";
+import { summarizeIndex } from "../../lib/frame-index/summary";
 import { proxyGop } from "../../lib/clips/proxy-rules";
-import { probePacketTimes } from "../../lib/video/ffprobe-packets";
+import { probePacketTimes } from "../../lib/frame-index/packets";
 import { buildProxy } from "../../lib/video/proxy";
 
 async function main() {

@@ -3,7 +3,8 @@ import { statSync } from "node:fs";
 import path from "node:path";
 import type { Knex } from "knex";
 import { insertClip, insertSteps, updateClip } from "../../lib/clips/queries";
-import { clipObjectKey, STEPS } from "../../lib/clips/rules";
+import { clipObjectKey } from "../../lib/clips/object-keys";
+import { STEPS } from "../../lib/clips/rules";
 import { enqueue } from "../../lib/jobs";
 import { putObjectFile } from "../../lib/storage";
 

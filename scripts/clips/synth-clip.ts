@@ -3,7 +3,7 @@ import { mkdir, mkdtemp, rm, writeFile } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
-import { probePacketTimes } from "../../lib/video/ffprobe-packets";
+import { probePacketTimes } from "../../lib/frame-index/packets";
 import { CODEC, ffmpegArgs, type GraphInputs } from "./synth-graph";
 import { dropSprite, glintSprite, surfacePpm } from "./synth-images";
 import { parseCli, resolveOptions, type SynthOptions } from "./synth-options";

@@ -1,6 +1,6 @@
-import type { PacketTimes } from "../../lib/video/ffprobe-packets";
+import type { PacketTimes } from "../../lib/frame-index/packets";
 import { frameCodeGeometry, type FrameCodeGeometry } from "../../lib/video/frame-code";
-import { ticksToSeconds } from "../../lib/video/packet-order";
+import { ticksToSeconds } from "../../lib/frame-index/packet-order";
 import { type DropPlan, FINAL_OPACITY, firstAtOrAfter, type FramePlan } from "./synth-plan";
 import type { SynthOptions } from "./synth-options";
 

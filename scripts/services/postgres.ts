@@ -187,10 +187,3 @@ async function canConnect(conn: pg.ClientConfig, dataDir: string): Promise<boole
     return false;
   }
 }
-
-export async function recreateDatabase(adminUrl: string, name: string): Promise<void> {
-  await withClient({ connectionString: adminUrl }, async (c) => {
-    await c.query(`drop database if exists ${quoteIdent(name)} with (force)`);
-    await c.query(`create database ${quoteIdent(name)}`);
-  });
-}

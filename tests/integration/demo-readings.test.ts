@@ -4,7 +4,7 @@ import path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/lib/db";
 import { stopBoss } from "@/lib/jobs";
-import { listDropsOfRun } from "@/lib/readings/drop-queries";
+import { listDropsOfRun } from "@/lib/drops/queries";
 import { listReadingsOfDrop } from "@/lib/readings/queries";
 import { currentReadings } from "@/lib/readings/rules";
 import { dixonQ } from "@/lib/stats/outliers";

@@ -5,7 +5,7 @@ import { runReviewerDigest } from "@/lib/notifications/digest";
 import { notifyDiscrepancy } from "@/lib/notifications/events";
 import { queueMail } from "@/lib/notifications/outbox";
 import { samplesRequestedMail } from "@/lib/notifications/templates";
-import type { DropRow } from "@/lib/readings/drop-queries";
+import type { DropRow } from "@/lib/drops/queries";
 import { signedIn, type Client } from "../helpers/app";
 import { demo, demoOrganisationId, makeUser } from "../helpers/fixtures";
 import { newRun, newSample, newSubmission } from "../helpers/intake";

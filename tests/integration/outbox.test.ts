@@ -7,7 +7,7 @@ import { notifyDiscrepancy, notifyResultsReleased } from "@/lib/notifications/ev
 import { queueMail } from "@/lib/notifications/outbox";
 import { claimOutbox, findOutbox } from "@/lib/notifications/queries";
 import { discrepancyMail } from "@/lib/notifications/templates";
-import type { DropRow } from "@/lib/readings/drop-queries";
+import type { DropRow } from "@/lib/drops/queries";
 import { demoOrganisationId, makeUser, uniqueEmail } from "../helpers/fixtures";
 import { mailsTo, waitForMail } from "../helpers/mailbox";
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { proxyBuildFailure, proxyRefusal } from "@/lib/clips/proxy-rules";
 import type { ClipRow, StepRow } from "@/lib/clips/queries";
-import { stepsWellInBrowser, STEPS } from "@/lib/clips/rules";
+import { stepsWellInBrowser } from "@/lib/clips/proxy-rules";
+import { STEPS } from "@/lib/clips/rules";
 import { verdictFromProbe } from "@/lib/clips/verify-rules";
 import { toClipView } from "@/lib/clips/view";
 

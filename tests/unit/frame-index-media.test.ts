@@ -3,7 +3,7 @@ import { mkdtempSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { probePacketTimes } from "@/lib/video/ffprobe-packets";
+import { probePacketTimes } from "@/lib/frame-index/packets";
 
 // Recordings made on the spot with Debian's ffmpeg, small and short, whose frame index (read from
 // packets, without decoding) must equal what a decoder outputs: ffprobe -show_frames is the

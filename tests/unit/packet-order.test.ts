@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fillFrameTimes, parseProbeLine, parseRational, type RawPacket, toDisplayOrder } from "@/lib/video/packet-order";
+import { fillFrameTimes, parseProbeLine, parseRational, type RawPacket, toDisplayOrder } from "@/lib/frame-index/packet-order";
 
 // Lines as ffprobe 5.1 prints them for `-show_entries packet=pts,dts,flags:stream=time_base,start_pts -of csv=p=1`.
 const packets = (lines: string[]): RawPacket[] => lines.map(parseProbeLine).flatMap((p) => (p?.kind === "packet" ? [p.packet] : []));

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { BALL_COLUMNS, ballsCsv, csv, dropsCsv, FORMULA_LIKE, timeDecimals } from "@/lib/reports/csv";
 import type { ReportData } from "@/lib/reports/data";
 import { frameRate } from "@/lib/reports/format";
-import { changeLines } from "@/lib/reports/sign-off";
+import { changeLines } from "@/lib/signoff/report-part";
 import type { BallResult } from "@/lib/results/rules";
 
 // The exports' text form: RFC 4180 (IETF, 2005) quoting, section 2 rules 6 and 7: a field holding a

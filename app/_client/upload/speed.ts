@@ -1,6 +1,6 @@
 // Upload speed and time left from how many bytes have been sent over the last few seconds.
 // Pure: the caller passes the clock, so it can be tested without waiting.
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 
 export interface SpeedSample {
   at: number;

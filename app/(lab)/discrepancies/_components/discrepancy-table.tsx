@@ -5,7 +5,8 @@ import { LocalTime } from "@/components/ui/local-time";
 import { Notice } from "@/components/ui/notice";
 import { useDiscrepancies, type DropView } from "@/app/_client/drops";
 import { seconds } from "@/app/_client/clip-words";
-import { countingReadings, signedSeconds } from "./reading-numbers";
+import { countingReadings } from "@/lib/readings/rules";
+import { signedSeconds } from "./reading-numbers";
 
 const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "Difference (second − first)", "Tolerance", "Since", "Ruling"];
 
@@ -33,7 +34,7 @@ export function DiscrepancyTable() {
         </thead>
         <tbody>
           {q.data.map((d) => {
-            const [first, second] = countingReadings(d);
+            const [first, second] = countingReadings(d.readings);
             const c = d.comparison;
             return (
               <tr key={d.id} className="border-t border-ink-100 align-top">

@@ -1,3 +1,4 @@
+import { UUID_PATTERN } from "@/lib/schema-parts";
 import Link from "next/link";
 import { requirePageActor } from "@/lib/auth/page-guard";
 import { EditionCaution } from "../_components/edition-caution";
@@ -5,7 +6,6 @@ import { EditionFormLoader } from "../_components/edition-form-loader";
 
 export const metadata = { title: "New edition" };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function NewEditionPage({ searchParams }: { searchParams: Promise<{ from?: string }> }) {
   await requirePageActor(["lead"]);
@@ -17,7 +17,7 @@ export default async function NewEditionPage({ searchParams }: { searchParams: P
         <h1 className="mt-2 text-3xl font-bold">New specification edition</h1>
       </div>
       <EditionCaution />
-      <EditionFormLoader mode="new" id={from && UUID.test(from) ? from : null} />
+      <EditionFormLoader mode="new" id={from && UUID_PATTERN.test(from) ? from : null} />
     </div>
   );
 }

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { Notice } from "@/components/ui/notice";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import { inProgress, useClip } from "@/app/_client/clips";
 import { ClipStatusBadge, clipProblem } from "@/app/(lab)/_shared/clips/clip-status-badge";
 import { ClipSteps } from "@/app/(lab)/_shared/clips/clip-steps";

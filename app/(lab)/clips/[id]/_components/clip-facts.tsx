@@ -1,6 +1,6 @@
 import { DetailList } from "@/components/ui/detail-list";
 import { LocalTime } from "@/components/ui/local-time";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import type { ClipView } from "@/app/_client/clips";
 import { containerName, describeIndex, indexDuration, proxyDecision, seconds } from "@/app/_client/clip-words";
 import { ShaField } from "./sha-field";

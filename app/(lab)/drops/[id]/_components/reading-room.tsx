@@ -1,5 +1,7 @@
 "use client";
 
+import { countingReadings } from "@/lib/readings/rules";
+import { isBeingRead } from "@/lib/drops/states";
 import { useMemo, useRef } from "react";
 import { useClip, useFrameIndex } from "@/app/_client/clips";
 import { useDrop, useSaveMarks, type DropView } from "@/app/_client/drops";
@@ -13,7 +15,7 @@ import { ReadingsTable } from "./readings-table";
 
 /** The marks drawn on the scrubber: the viewer's own draft, or every visible reading that counts. */
 function marksOf(drop: DropView): PlayerMark[] {
-  const shown = drop.myDraft ? [drop.myDraft] : drop.readings.filter((r) => r.status === "submitted" && !r.superseded);
+  const shown = drop.myDraft ? [drop.myDraft] : countingReadings(drop.readings);
   return shown.flatMap((r) => {
     const who = shown.length > 1 ? ` (${r.reviewerName})` : "";
     const m: PlayerMark[] = [];
@@ -37,7 +39,7 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
   if (q.isPending) return <p role="status" className="text-ink-600">Loading the drop…</p>;
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const d = q.data;
-  const settled = d.state !== null && !["unread", "read once"].includes(d.state);
+  const settled = d.state !== null && !isBeingRead(d.state);
   const canMark = canRead && d.clip?.status === "ready" && (d.myDraft !== null || (!d.mySubmitted && !settled));
   const mark = (which: "dispenseFrame" | "clearFrame") => {
     if (!save.isPending) gate.attempt(which === "dispenseFrame" ? "Dispense" : "Clear", (frame) => save.mutate({ [which]: frame }));

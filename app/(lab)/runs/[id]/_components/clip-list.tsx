@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { LocalTime } from "@/components/ui/local-time";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import type { ClipView } from "@/app/_client/clips";
 import { ClipStatusBadge, clipProblem } from "@/app/(lab)/_shared/clips/clip-status-badge";
 

@@ -2,7 +2,7 @@
 
 import { useId, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import type { UploadJob } from "@/app/_client/upload/upload-jobs";
 import type { Uploads } from "@/app/_client/upload/use-uploads";
 

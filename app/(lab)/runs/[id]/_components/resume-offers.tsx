@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import { useUploadState, type ClipView } from "@/app/_client/clips";
 import { listPending, readable, removePending, sameFile, type PendingUpload } from "@/app/_client/upload/pending-store";
 

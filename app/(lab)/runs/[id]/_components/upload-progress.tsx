@@ -1,7 +1,7 @@
 "use client";
 
 import { ProgressBar } from "@/components/ui/progress-bar";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import { formatDuration, formatSpeed } from "@/app/_client/upload/speed";
 import type { UploadJob } from "@/app/_client/upload/upload-jobs";
 

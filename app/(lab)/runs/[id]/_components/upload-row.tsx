@@ -2,7 +2,7 @@
 
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { formatBytes } from "@/lib/clips/rules";
+import { formatBytes } from "@/lib/numbers";
 import { canTrimInBrowser, TRIM_MAX_BYTES } from "@/app/_client/trim/trim-rules";
 import { isActive, type UploadJob } from "@/app/_client/upload/upload-jobs";
 import type { Uploads } from "@/app/_client/upload/use-uploads";

@@ -1,5 +1,5 @@
 import { idParam, route } from "@/lib/http/route";
-import * as drops from "@/lib/readings/drop-service";
+import * as drops from "@/lib/drops/service";
 import { placementSchema } from "@/lib/readings/schema";
 
 // PUT /api/drops/:id/placement — put the drop on one of its run's clips, near its dispense frame.

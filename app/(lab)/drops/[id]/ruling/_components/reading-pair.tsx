@@ -1,5 +1,6 @@
 "use client";
 
+import { countingReadings } from "@/lib/readings/rules";
 import { milliseconds as s } from "@/app/_client/clip-words";
 import type { DropView, ReadingView } from "@/app/_client/drops";
 import { signedSeconds } from "@/app/(lab)/discrepancies/_components/reading-numbers";
@@ -30,7 +31,7 @@ function Column({ title, r, onJump }: { title: string; r: ReadingView | undefine
 
 /** The two readings that disagree, side by side, with the difference between them. */
 export function ReadingPair({ drop, onJump }: { drop: DropView; onJump: (f: number) => void }) {
-  const current = drop.readings.filter((r) => r.status === "submitted" && !r.superseded);
+  const current = countingReadings(drop.readings);
   const c = drop.comparison;
   return (
     <div className="space-y-3">

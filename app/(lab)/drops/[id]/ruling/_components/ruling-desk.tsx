@@ -1,5 +1,6 @@
 "use client";
 
+import { countingReadings } from "@/lib/readings/rules";
 import { useMemo, useRef, useState } from "react";
 import { milliseconds as s } from "@/app/_client/clip-words";
 import { useClip, useFrameIndex } from "@/app/_client/clips";
@@ -25,7 +26,7 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
   const [third, setThird] = useState<ThirdMarks>({ dispenseFrame: null, clearFrame: null });
   const drop = q.data;
   const marks = useMemo<PlayerMark[]>(() => {
-    const shown = (drop?.readings ?? []).filter((r) => r.status === "submitted" && !r.superseded);
+    const shown = countingReadings(drop?.readings ?? []);
     const m = shown.flatMap((r) => [
       ...(r.dispenseFrame === null ? [] : [{ frame: r.dispenseFrame, label: `Dispense (${r.reviewerName})`, kind: "dispense" as const }]),
       ...(r.clearFrame === null ? [] : [{ frame: r.clearFrame, label: `Clear (${r.reviewerName})`, kind: "clear" as const }]),

@@ -1,3 +1,4 @@
+import { UUID_PATTERN } from "@/lib/schema-parts";
 import { notFound } from "next/navigation";
 import type { Actor } from "@/lib/auth/actor";
 import { getEdition } from "@/lib/editions/service";
@@ -5,11 +6,10 @@ import { AppError } from "@/lib/errors";
 import { visibleSample } from "@/lib/samples/service";
 import { visibleSubmission } from "@/lib/submissions/service";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** The sample, its submission and its edition's limits, or the not-found page. */
 export async function sampleContext(actor: Actor, id: string) {
-  if (!UUID.test(id)) notFound();
+  if (!UUID_PATTERN.test(id)) notFound();
   try {
     const sample = await visibleSample(actor, id);
     const submission = await visibleSubmission(actor, sample.submissionId);

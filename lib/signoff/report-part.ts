@@ -1,8 +1,8 @@
 import type { Db } from "../db";
 import { listRulingsOfSubmission } from "../rulings/queries";
-import { listReopenings, listSignatures, type SignatureRow } from "../signoff/queries";
-import { currentRevision, type ResultChanges } from "../signoff/rules";
-import { fixed } from "./format";
+import { listReopenings, listSignatures, type SignatureRow } from "./queries";
+import { currentRevision, type ResultChanges } from "./rules";
+import { fixed } from "../reports/format";
 
 // The report's sign-off part: rulings with reasons, the signature of the revision in force, the
 // revision history, and what changed since the previous revision. Read from the rulings,

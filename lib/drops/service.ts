@@ -1,17 +1,17 @@
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
-import { findFrameIndexSummary } from "../clips/index-queries";
+import { findFrameIndexSummary } from "../frame-index/queries";
 import { findClip } from "../clips/queries";
 import { db } from "../db";
 import { AppError } from "../errors";
 import { findRun } from "../runs/queries";
 import { assertDropUnlocked } from "../signoff/lock";
 import { assertLead } from "../submissions/policy";
-import { findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./drop-queries";
-import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer, isReviewer } from "./policy";
-import { countReadingsOfDrop, listReadingsOfDrop, listReadingsOfDrops } from "./queries";
-import type { PlacementInput } from "./schema";
-import { toDropView, type DropView, type QueueItem } from "./view";
+import { findDrop, listDiscrepancies, listDropsOfRun, listQueueFor, updatePlacement, type DropRow } from "./queries";
+import { assertCanPlaceDrops, assertCanSeeDrops, assertReviewer, isReviewer } from "../readings/policy";
+import { countReadingsOfDrop, listReadingsOfDrop, listReadingsOfDrops } from "../readings/queries";
+import type { PlacementInput } from "../readings/schema";
+import { toDropView, type DropView, type QueueItem } from "../readings/view";
 
 // Drops as the lab handles them: placed on a clip by a technician, queued for reviewers, and
 // settled or sent to the leads.

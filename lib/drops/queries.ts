@@ -1,5 +1,5 @@
 import type { Db } from "../db";
-import type { DropState } from "./rules";
+import { BEING_READ_STATES, type DropState } from "./states";
 
 export interface DropRow {
   id: string;
@@ -125,7 +125,7 @@ export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Prom
   const rows = await base(q)
     .where("c.status", "ready")
     .whereNull("r.voided_at")
-    .whereIn("d.state", ["unread", "read once"])
+    .whereIn("d.state", BEING_READ_STATES)
     .where((w) =>
       w
         .whereExists((e) => e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where({ "m.reviewer_id": reviewerId, "m.status": "draft" }))
