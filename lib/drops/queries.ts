@@ -1,5 +1,5 @@
 import type { Db } from "../db";
-import { BEING_READ_STATES, type DropState } from "./states";
+import { BEING_READ_STATES, type DropState, SETTLED_STATES } from "./states";
 
 export interface DropRow {
   id: string;
@@ -143,4 +143,10 @@ export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Prom
 /** The leads' queue: drops whose two readings disagree, the oldest first (not of a voided run). */
 export async function listDiscrepancies(q: Db, limit = 200): Promise<DropRow[]> {
   return (await base(q).where("d.state", "discrepancy").whereNull("r.voided_at").orderBy("d.state_changed_at", "asc").limit(limit)).map(toDrop);
+}
+
+/** Drops of a run not yet settled: a ball has a result only when there are none. */
+export async function countUnsettledDrops(q: Db, runId: string): Promise<number> {
+  const r = await q("drops").where({ run_id: runId }).whereNotIn("state", SETTLED_STATES).count<{ n: string }[]>("* as n").first();
+  return Number(r?.n ?? 0);
 }

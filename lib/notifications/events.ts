@@ -2,13 +2,13 @@ import type { Knex } from "knex";
 import type { Db } from "../db";
 import { env } from "../env";
 import type { DropRow } from "../drops/queries";
-import { SETTLED_STATES } from "../drops/states";
 import { loadSubmissionResults } from "../results/service";
 import { decimalsOf } from "../numbers";
 import { judgedThresholds, secsAgainst } from "../results/words";
 import { findSubmission } from "../submissions/queries";
 import { queueMail } from "./outbox";
-import { countUnsettledDrops, insertBelowLimitReports, listReportedBelow } from "./report-queries";
+import { insertBelowLimitReports, listReportedBelow } from "./report-queries";
+import { countUnsettledDrops } from "../drops/queries";
 import { organisationRecipients, recipientsWithRole } from "./queries";
 import { belowLimitMail, discrepancyMail, resultsReleasedMail } from "./templates";
 
@@ -39,7 +39,7 @@ export async function notifyBelowLimit(trx: Db, drop: Pick<DropRow, "runId" | "s
 }
 
 async function belowLimitMails(trx: Db, drop: Pick<DropRow, "runId" | "submissionId">): Promise<string[]> {
-  if ((await countUnsettledDrops(trx, drop.runId, SETTLED_STATES)) > 0) return [];
+  if ((await countUnsettledDrops(trx, drop.runId)) > 0) return [];
   const s = await findSubmission(trx, drop.submissionId);
   if (!s) return [];
   const results = await loadSubmissionResults(trx, s);

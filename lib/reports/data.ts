@@ -3,7 +3,6 @@ import { db } from "../db";
 import type { EditionRow } from "../editions/queries";
 import { env } from "../env";
 import type { SubmissionDecision } from "../results/decision";
-import { SETTLED_STATES } from "../drops/states";
 import type { BallResult } from "../results/rules";
 import { loadSubmissionResults } from "../results/service";
 import { listRunsOfSubmission } from "../runs/queries";
@@ -70,7 +69,7 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
     loadSubmissionResults(q, s),
     listSamples(q, s.id),
     listRunsOfSubmission(q, s.id),
-    listReportDrops(q, s.id, SETTLED_STATES),
+    listReportDrops(q, s.id),
     listReportClips(q, s.id),
   ]);
   const { edition, balls, decision } = results;

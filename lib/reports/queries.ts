@@ -1,6 +1,6 @@
 import type { Db } from "../db";
 import { trimKept } from "../clips/trim-provenance";
-import { CURRENT_SUBMITTED_G } from "../readings/queries";
+import { listSubmissionDrops } from "../readings/settled-queries";
 
 // What the report adds to the results: each settled drop's marks and clip, and the clips' identity.
 
@@ -36,25 +36,16 @@ export interface ReportClipRow {
   trimNote: string | null;
 }
 
-/** Marks of settled drops only, so nothing of a drop still being read blind leaves this query. */
-export async function listReportDrops(q: Db, submissionId: string, settled: readonly string[]): Promise<ReportDropRow[]> {
-  const rows = await q.raw(
-    `select d.id, d.run_id, d.ordinal, d.state, d.clip_id,
-            coalesce(cur.readings, '[]'::json) as readings
-       from drops d
-       join runs r on r.id = d.run_id
-       join samples x on x.id = r.sample_id
-       left join lateral (
-         select json_agg(json_build_object('slot', g.slot, 'reader', u.name, 'dispenseFrame', g.dispense_frame,
-                         'clearFrame', g.clear_frame, 'timeS', g.time_s) order by g.slot) as readings
-           from readings g join users u on u.id = g.reviewer_id
-          where g.drop_id = d.id and ${CURRENT_SUBMITTED_G}
-       ) cur on d.state = any(?)
-      where x.submission_id = ?
-      order by d.run_id, d.ordinal`,
-    [[...settled], submissionId],
-  );
-  return rows.rows.map((r: Record<string, any>) => ({ id: r.id, runId: r.run_id, ordinal: r.ordinal, state: r.state, clipId: r.clip_id, readings: r.readings }));
+/** Marks of settled drops only (lib/readings/settled-queries.ts), so nothing of a drop still being read blind leaves this query. */
+export async function listReportDrops(q: Db, submissionId: string): Promise<ReportDropRow[]> {
+  return (await listSubmissionDrops(q, submissionId)).map((d) => ({
+    id: d.id,
+    runId: d.runId,
+    ordinal: d.ordinal,
+    state: d.state,
+    clipId: d.clipId,
+    readings: d.readings.map(({ slot, reader, dispenseFrame, clearFrame, timeS }) => ({ slot, reader, dispenseFrame, clearFrame, timeS })),
+  }));
 }
 
 /** The ready clips of the submission's runs, with their hash and frame index summary. */

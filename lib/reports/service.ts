@@ -28,11 +28,3 @@ export async function ballsExport(actor: Actor, submissionId: string): Promise<R
   const r = await reportData(actor, submissionId);
   return { fileName: `balls-${safe(r.submission.reference)}.csv`, contentType: "text/csv; charset=utf-8; header=present", body: ballsCsv(r) };
 }
-
-/** A file as an HTTP response: downloaded, never cached by shared caches. */
-export function fileResponse(f: ReportFile): Response {
-  const body = typeof f.body === "string" ? f.body : new Uint8Array(f.body);
-  return new Response(body, {
-    headers: { "content-type": f.contentType, "content-disposition": `attachment; filename="${f.fileName}"`, "cache-control": "private, no-store" },
-  });
-}

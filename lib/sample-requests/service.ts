@@ -1,4 +1,5 @@
 import type { Actor } from "../auth/actor";
+import { assertCanAcknowledge } from "./policy";
 import { recordChange } from "../audit/record";
 import { db } from "../db";
 import { env } from "../env";
@@ -9,7 +10,6 @@ import { samplesRequestedMail } from "../notifications/templates";
 import { assertCanEditIntake } from "../submissions/policy";
 import { lockSubmission } from "../submissions/queries";
 import { visibleSubmission } from "../submissions/service";
-import { hasRole } from "../users/rules";
 import { acknowledgeRow, findSampleRequest, insertSampleRequest, listSampleRequests as selectRequests, startRound } from "./queries";
 import type { SampleRequestRow } from "./view";
 import type { AcknowledgeInput, SampleRequestInput } from "./schema";
@@ -44,7 +44,7 @@ export async function requestSamples(actor: Actor, submissionId: string, v: Samp
 
 /** The manufacturer acknowledges a request of its own organisation and gives the shipping details. */
 export async function acknowledgeRequest(actor: Actor, id: string, v: AcknowledgeInput): Promise<SampleRequestRow> {
-  if (!hasRole(actor, "manufacturer")) throw new AppError("forbidden", "Only the manufacturer acknowledges a request for samples.");
+  assertCanAcknowledge(actor);
   return db().transaction(async (trx) => {
     const r = await findSampleRequest(trx, id, { lock: true });
     if (!r) throw new AppError("not_found", "No such request.");
