@@ -34,14 +34,14 @@ function load(): void {
   if (messages.length > LIMIT) {
     messages = messages.slice(-LIMIT);
     // Compact, so the file does not grow without end across restarts.
-    fs.writeFileSync(storeFile, messages.map((m) => JSON.stringify(m) + "\n").join(""));
+    fs.writeFileSync(storeFile, messages.map((m) => `${JSON.stringify(m)}\n`).join(""));
   }
 }
 
 function keep(m: StoredMessage): void {
   messages.push(m);
   if (messages.length > LIMIT) messages.shift();
-  if (storeFile) fs.appendFileSync(storeFile, JSON.stringify(m) + "\n");
+  if (storeFile) fs.appendFileSync(storeFile, `${JSON.stringify(m)}\n`);
 }
 
 const addresses = (a: AddressObject | AddressObject[] | undefined): string[] =>

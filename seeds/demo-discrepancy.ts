@@ -29,7 +29,7 @@ export async function seedDemoDiscrepancy(knex: Knex, dataDir: string, log: (s: 
   const drop = await knex("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as x", "x.id", "r.sample_id")
     .where({ "x.serial": serial, "d.ordinal": ordinal }).whereNotNull("d.clip_id").first("d.id", "d.state");
   const truthFile = path.join(dataDir, `${serial}.mp4.truth.json`);
-  if (!drop || drop.state !== "unread" || !existsSync(truthFile)) return;
+  if (drop?.state !== "unread" || !existsSync(truthFile)) return;
   const truth = JSON.parse(readFileSync(truthFile, "utf8")) as Truth;
   const t = truth.drops[ordinal - 1];
   const rate = parseRate(truth.options.fps);

@@ -10,7 +10,7 @@ import type { Marks } from "./demo-results-plan";
 
 export async function actorByEmail(knex: Knex, email: string): Promise<Actor> {
   const u = await findUserByEmail(knex, email);
-  if (!u || !u.active) throw new Error(`the demo account ${email} is missing or inactive`);
+  if (!u?.active) throw new Error(`the demo account ${email} is missing or inactive`);
   return { id: u.id, email: u.email, name: u.name, roles: u.roles, organisationId: u.organisationId, requestId: randomUUID() };
 }
 

@@ -65,8 +65,10 @@ export function ChartFigure({
             </thead>
             <tbody>
               {table.rows.map((row, i) => (
+                // biome-ignore lint/suspicious/noArrayIndexKey: a table of numbers rebuilt whole with its chart
                 <tr key={i} className="border-t border-ink-100">
                   {row.map((v, j) => (
+                    // biome-ignore lint/suspicious/noArrayIndexKey: cells in column order, rebuilt whole with the row
                     <td key={j} className={`px-3 py-1.5 ${right[j] ? "text-right tabular-nums" : ""}`}>{String(v)}</td>
                   ))}
                 </tr>

@@ -39,6 +39,7 @@ export function PlayerControls({ actions: a, playing, speed, onSpeed, frameCount
   };
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2">
+      {/* biome-ignore lint/a11y/useSemanticElements: a labelled row of buttons, not form fields */}
       <div role="group" aria-label="Step" className="flex flex-wrap items-center gap-1">
         <StepButton label="One second back" text="−1 s" onClick={a.backSecond} />
         <StepButton label="Ten frames back" text="−10" onClick={a.back10} />

@@ -70,8 +70,10 @@ export function PlayerPicture(p: Props) {
     </Pane>
   );
   return (
+    // biome-ignore lint/a11y/useSemanticElements: the picture takes focus to receive the stepping keys; a fieldset would be wrong
     <div
       ref={p.surfaceRef}
+      // biome-ignore lint/a11y/noNoninteractiveTabindex: the picture is the keyboard target of the player
       tabIndex={0}
       role="group"
       aria-label={`Picture of ${p.title}. Arrow keys step through the frames; press ? for every key.`}

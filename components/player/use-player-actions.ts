@@ -25,6 +25,7 @@ interface Deps {
 
 /** Every action of the player, for its buttons and its keys alike. */
 export function usePlayerActions(d: Deps): Record<PlayerAction, () => void> {
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the setters passed in are React state setters, the same on every render
   return useMemo(() => {
     // From the latest frame asked for, not the last one shown: held keys add up while seeks run.
     const from = () => d.seeker.current?.current.target ?? 0;

@@ -21,6 +21,7 @@ export function DataTable<T>({
   empty,
 }: {
   caption: string;
+  // biome-ignore lint/suspicious/noExplicitAny: a table's columns hold values of different types (TanStack's own idiom)
   columns: ColumnDef<T, any>[];
   data: T[];
   sort: Sort;

@@ -4,7 +4,7 @@ export const RETURN_TO_HEADER = "x-wickmark-return-to";
 
 /** Only same-site paths: an open redirect would let a link send people elsewhere after sign-in. */
 export function safeReturnPath(next: string | null | undefined): string | null {
-  return next && next.startsWith("/") && !next.startsWith("//") && !next.startsWith("/\\") ? next : null;
+  return next?.startsWith("/") && !next.startsWith("//") && !next.startsWith("/\\") ? next : null;
 }
 
 /** The sign-in page, remembering the page to return to. */

@@ -15,7 +15,7 @@ export async function currentActor(requestId?: string): Promise<Actor | null> {
   const id = (session?.user as { id?: string } | undefined)?.id;
   if (!id) return null;
   const user = await findUserById(db(), id);
-  if (!user || !user.active || !user.passwordHash) return null;
+  if (!user?.active || !user.passwordHash) return null;
   const rid = requestId ?? (await headers()).get("x-request-id") ?? randomUUID();
   return { id: user.id, email: user.email, name: user.name, roles: user.roles, organisationId: user.organisationId, requestId: rid };
 }

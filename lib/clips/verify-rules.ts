@@ -20,6 +20,7 @@ export interface ProbeSummary {
   audioStreams: number;
 }
 
+// biome-ignore lint/suspicious/noExplicitAny: ffprobe's JSON, read field by field and checked below
 type Json = Record<string, any>;
 export type Verdict = { ok: true; probe: ProbeSummary } | { ok: false; reason: string };
 

@@ -11,7 +11,7 @@ import { summarizeIndex } from "./summary";
 export async function indexStep(clip: ClipRow): Promise<StepOutcome> {
   const probe = clip.probe;
   if (!probe) throw new Error("the clip has not been verified yet");
-  let packets;
+  let packets: Awaited<ReturnType<typeof probePacketTimes>>;
   try {
     packets = await probePacketTimes(await originalUrl(clip));
   } catch (err) {

@@ -3,7 +3,7 @@ import type { DropRow } from "../drops/queries";
 import { canSeeReading, isBlindFor } from "./policy";
 import type { ReadingRow } from "./queries";
 import { currentReadings, supersededIds } from "./rules";
-import { type DropState } from "../drops/states";
+import type { DropState } from "../drops/states";
 
 // What one person sees of a drop and its readings. Every response that carries drops or readings
 // is built here, so the blind rule has one home.

@@ -45,7 +45,7 @@ export function timeDecimals(tb: { num: number; den: number } | null): number {
 const at = (v: number | null | undefined, digits: number) => (v === null || v === undefined ? "" : Number(v.toFixed(digits)));
 
 export function csv(columns: readonly string[], rows: (string | number)[][]): string {
-  return Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n", quotes: false, escapeFormulae: FORMULA_LIKE }) + "\r\n";
+  return `${Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n", quotes: false, escapeFormulae: FORMULA_LIKE })}\r\n`;
 }
 
 export function dropsCsv(r: ReportData): string {

@@ -129,7 +129,10 @@ function clips(doc: Doc, r: ReportData): void {
 function rulings(doc: Doc, r: ReportData): void {
   heading(doc, "Rulings");
   const list = r.signOff.rulings;
-  if (list.length === 0) return paragraph(doc, "No rulings have been made on this submission's drops.");
+  if (list.length === 0) {
+    paragraph(doc, "No rulings have been made on this submission's drops.");
+    return;
+  }
   table(doc, [{ head: "Ball", width: 56 }, { head: "Drop", width: 28, align: "right" }, { head: "Accepted", width: 92 }, { head: "Ruled time s", width: 44, align: "right" }, { head: "Lead, when (UTC)", width: 84 }, { head: "Reason", width: 195 }],
     list.map((x) => [x.serial, String(x.dropOrdinal), x.accepted, fixed(x.timeS, 3), `${x.lead}, ${utcShort(x.at)}`, x.reason]));
   paragraph(doc, "A lead settles a drop whose two readings disagree by accepting one of them or by reading it a third time; the readings themselves are never changed.", { size: 7.5, color: MUTED });

@@ -46,7 +46,7 @@ export async function createSubmission(actor: Actor, v: SubmissionValues): Promi
 async function checkApprovalLink(trx: Parameters<typeof findSubmission>[0], v: SubmissionValues) {
   const approval = await findSubmission(trx, v.approvalSubmissionId!);
   const field = { approvalSubmissionId: "Choose an approval submission of the same organisation." };
-  if (!approval || approval.kind !== "approval") throw new AppError("validation", "The linked submission must be an approval submission.", { fields: field });
+  if (approval?.kind !== "approval") throw new AppError("validation", "The linked submission must be an approval submission.", { fields: field });
   if (approval.organisationId !== v.organisationId) throw new AppError("validation", "The linked approval submission belongs to another organisation.", { fields: field });
 }
 

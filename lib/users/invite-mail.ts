@@ -4,7 +4,7 @@ const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt
 
 /** The invitation e-mail: pure, so its wording and link are tested without SMTP. */
 export function inviteMail(o: { to: string; name: string; invitedBy: string; link: string; expiresAt: Date }): OutgoingMail {
-  const expires = o.expiresAt.toISOString().replace("T", " ").slice(0, 16) + " UTC";
+  const expires = `${o.expiresAt.toISOString().replace("T", " ").slice(0, 16)} UTC`;
   const text = [
     `Hello ${o.name},`,
     "",

@@ -21,7 +21,7 @@ async function usableInvite(q: Db, token: string, lock: boolean): Promise<Invite
 export async function describeInvite(token: string): Promise<{ email: string; name: string }> {
   const invite = await usableInvite(db(), token, false);
   const user = await findUserById(db(), invite.userId);
-  if (!user || !user.active) throw new AppError("gone", "This account is no longer active. Ask a lead.");
+  if (!user?.active) throw new AppError("gone", "This account is no longer active. Ask a lead.");
   return { email: user.email, name: user.name };
 }
 
@@ -30,7 +30,7 @@ export async function acceptInvite(token: string, password: string): Promise<{ e
   return db().transaction(async (trx) => {
     const invite = await usableInvite(trx, token, true);
     const user = await findUserById(trx, invite.userId);
-    if (!user || !user.active) throw new AppError("gone", "This account is no longer active. Ask a lead.");
+    if (!user?.active) throw new AppError("gone", "This account is no longer active. Ask a lead.");
     await updateUserRow(trx, user.id, { passwordHash });
     await markInviteUsed(trx, invite.id);
     const self = { id: user.id, email: user.email, name: user.name, roles: user.roles, organisationId: user.organisationId, requestId: randomUUID() };

@@ -5,7 +5,7 @@ import { hashPassword } from "../../lib/auth/password";
 import { db } from "../../lib/db";
 import { insertUser } from "../../lib/users/queries";
 import { DEMO_PASSWORD } from "../../seeds/demo";
-import { Client, signedIn } from "../../tests/helpers/app";
+import { type Client, signedIn } from "../../tests/helpers/app";
 import { clipSettled, ingestClipFile } from "../clips/ingest";
 import { projectRoot } from "../services/service";
 

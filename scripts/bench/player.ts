@@ -24,7 +24,7 @@ function serve(files: Record<string, { file: string; type: string }>): Promise<h
     const size = statSync(f.file).size;
     const m = /^bytes=(\d+)-(\d*)$/.exec(req.headers.range ?? "");
     const start = m ? Number(m[1]) : 0;
-    const end = m && m[2] ? Math.min(size - 1, Number(m[2])) : size - 1;
+    const end = m?.[2] ? Math.min(size - 1, Number(m[2])) : size - 1;
     res.writeHead(m ? 206 : 200, { "Content-Type": f.type, "Content-Length": end - start + 1, "Accept-Ranges": "bytes", ...(m ? { "Content-Range": `bytes ${start}-${end}/${size}` } : {}) });
     createReadStream(f.file, { start, end }).pipe(res);
   });
@@ -121,8 +121,18 @@ async function measureInPage(o: { steps: number; seeks: number; times: number[] 
       let seeked = false;
       let painted = false;
       const done = () => seeked && painted && resolve();
-      bare.requestVideoFrameCallback(() => ((painted = true), done()));
-      bare.addEventListener("seeked", () => ((seeked = true), done()), { once: true });
+      bare.requestVideoFrameCallback(() => {
+        painted = true;
+        done();
+      });
+      bare.addEventListener(
+        "seeked",
+        () => {
+          seeked = true;
+          done();
+        },
+        { once: true },
+      );
       bare.currentTime = mid(i);
     });
   surface.focus();
@@ -161,7 +171,10 @@ async function measureInPage(o: { steps: number; seeks: number; times: number[] 
     bareSteps.push(await timed(() => bareSeek(start + i)));
   }
   let a = 7;
-  const random = () => ((a = (a * 1103515245 + 12345) % 2 ** 31), a / 2 ** 31);
+  const random = () => {
+    a = (a * 1103515245 + 12345) % 2 ** 31;
+    return a / 2 ** 31;
+  };
   const seeks: number[] = [];
   const bareSeeks: number[] = [];
   for (let i = 0; i < o.seeks; i++) {

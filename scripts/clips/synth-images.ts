@@ -5,7 +5,7 @@ import { BALL } from "./synth-plan";
 // seconds for one shaded 1080p frame, against well under one here). Pure: returns file contents
 // (PPM / PAM, which ffmpeg reads natively).
 
-const clamp255 = (v: number) => (v < 0 ? 0 : v > 255 ? 255 : v);
+const clamp255 = (v: number) => (v < 0 ? 0 : Math.min(v , 255));
 
 /** Fixed per-pixel grain of the cover: static, so it moves with the ball when the camera shakes. */
 function grain(x: number, y: number, seed: number): number {
@@ -101,7 +101,7 @@ export function dropSprite(rx: number, ry: number): Sprite {
       const ey = (y + 0.5 - h / 2) / ry;
       const rho = Math.sqrt(ex * ex + ey * ey);
       const edge = Math.min(1, Math.max(0, (1 - rho) * Math.min(rx, ry))); // ~1 px soft edge
-      const dome = Math.pow(Math.max(0, 1 - rho * rho), 0.3);
+      const dome = Math.max(0, 1 - rho * rho) ** 0.3;
       const rim = rho > 0.82 && rho < 1 ? 0.12 : 0;
       const a = Math.min(1, 0.8 * dome + rim) * edge;
       const o = (y * w + x) * 4;

@@ -76,7 +76,7 @@ function prepareDir(dir: string): void {
 async function initdb(bin: string, o: PostgresOptions, dataDir: string): Promise<void> {
   const pwDir = fs.mkdtempSync(path.join(os.tmpdir(), "wm-pgpw-"));
   const pwFile = path.join(pwDir, "pw");
-  fs.writeFileSync(pwFile, o.password + "\n", { mode: 0o600 });
+  fs.writeFileSync(pwFile, `${o.password}\n`, { mode: 0o600 });
   prepareDir(pwDir);
   try {
     const base = ["-D", dataDir, "-U", o.user, "--auth-local=trust", "--auth-host=scram-sha-256",

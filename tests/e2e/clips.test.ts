@@ -86,6 +86,7 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     await row.getByText(/MB\/s · .* left · \d of 3 parts stored/).waitFor();
     await screenshot(page, "clips-uploading");
     await expect.poll(() => valueNow(bar), { timeout: 20_000, interval: 50 }).toBeGreaterThan(early);
+    // biome-ignore lint/performance/useDomNodeTextContent: Playwright's locator, not a DOM node: innerText is the text as shown
     const shown = (await row.getByText(/MB\/s/).innerText()).match(/([\d.]+ [kM]B\/s)/)?.[1];
     console.log(`[clips e2e] upload speed shown under a 3 MB/s link: ${shown}`);
 

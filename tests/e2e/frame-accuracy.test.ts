@@ -108,7 +108,7 @@ function settleAndRead(p: Page, target: number, g: FrameCodeGeometry, videoId = 
 }
 
 describe("frame accuracy of the player in Chromium, for every kind of recording", () => {
-  for (const [name, opts] of CLIP_VARIANTS) {
+  for (const [name] of CLIP_VARIANTS) {
     it(`${name}: each frame shown is the frame asked for, by the frame code in its pixels`, { timeout: 300_000 }, async () => {
       const clip = await ready.get(name)!;
       expect(clip.status, clip.rejectReason ?? "").toBe("ready");

@@ -51,7 +51,7 @@ const uploadedClip = async () => (await uploadFile(lead, clipRun, clipFile, { st
 
 // Readings: the matrix reviewer works on drops of its own; a reading of the demo reviewer's is
 // one the matrix reviewer is blind to (404), while staff who do not read drops may see it.
-let drops: string[] = [];
+const drops: string[] = [];
 let readerClient: Client;
 const once = <T,>(make: () => Promise<T>) => {
   let p: Promise<T> | undefined;

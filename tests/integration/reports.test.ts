@@ -168,7 +168,7 @@ describe("the test report and exports", () => {
     const flat = oneLine(await pdfText(res, "signed-1"));
     expect(flat).toMatch(new RegExp(`Signed off by ${leadName} on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC: results reviewed and released \\(revision 1\\)`));
     expect(layoutText("signed-1")).toMatch(new RegExp(`Signed by ${leadName} When \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC Meaning results reviewed and released Revision 1`));
-    expect(flat).toContain("Oil absorption test report · " + submission.reference + " · Revision 1");
+    expect(flat).toContain(`Oil absorption test report · ${submission.reference} · Revision 1`);
     expect(flat).not.toMatch(/DRAFT|not signed off/);
     expect(flat).toContain(RULING_REASON);
     const drops = Papa.parse<Record<string, string>>(await (await file(maker, "drops.csv")).text(), { header: true, skipEmptyLines: true });

@@ -60,7 +60,7 @@ describe("the run that counts", () => {
   it("of two runs tested in the same minute, the one recorded later counts, also after the earlier one is edited", async () => {
     const s = await newSubmission(lead, await demoOrganisationId());
     const sample = await newSample(lead, s.id, { serial: "TIE-1" });
-    const testedAt = new Date(Date.now() - 60_000).toISOString().slice(0, 16) + ":00.000Z";
+    const testedAt = `${new Date(Date.now() - 60_000).toISOString().slice(0, 16)}:00.000Z`;
     const earlier = (await newRun(lead, sample.id, { testedAt })).id;
     const later = (await newRun(lead, sample.id, { testedAt })).id;
     expect((await results(s.id)).balls[0].runId).toBe(later);

@@ -20,7 +20,7 @@ function pages(dir: string): string[] {
 /** The URL path of a page folder: route groups dropped, each [param] filled with an id. */
 function urlOf(folder: string): string {
   const parts = path.relative(APP, folder).split(path.sep).filter((s) => !/^\(.*\)$/.test(s));
-  return "/" + parts.map((s) => (/^\[.*\]$/.test(s) ? SOME_ID : s)).join("/");
+  return `/${parts.map((s) => (/^\[.*\]$/.test(s) ? SOME_ID : s)).join("/")}`;
 }
 
 const discovered = [

@@ -12,7 +12,7 @@ class FakeVideo extends EventTarget {
   private callbacks = new Map<number, VideoFrameRequestCallback>();
   private next = 1;
   private time = 0;
-  constructor(private times: number[], private seekMs = 20) {
+  constructor(times: number[], private seekMs = 20) {
     super();
     this.paint = (t) => [...times].reverse().find((s) => s <= t) ?? null;
   }

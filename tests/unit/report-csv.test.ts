@@ -15,9 +15,12 @@ const ball = (over: Partial<BallResult>): BallResult => ({
 const EDITION = { criterion: "ball_mean", minAbsorptionS: 135, guardBandS: 10 };
 const data = (balls: BallResult[], edition: object = EDITION) => ({ submission: { reference: "D-2026-0009" }, edition, balls } as unknown as ReportData);
 
+// Sums of decimals in binary carry noise: 140.33 + 0.33 is 140.66000000000003 in double precision.
+const NOISY_MEAN = 140.33 + 0.33;
+
 describe("numbers at the precision their measurement supports", () => {
   it("writes statistics to the millisecond, without float noise, and still as numbers", () => {
-    const row = ballsCsv(data([ball({ mean: 140.659999999999997, sd: 1.2345678, min: 139.0000000001, max: 142.1, range: 3.0999999999999943, value: 140.659999999999997 })])).split("\r\n")[1];
+    const row = ballsCsv(data([ball({ mean: NOISY_MEAN, sd: 1.2345678, min: 139.0000000001, max: 142.1, range: 142.1 - 139, value: NOISY_MEAN })])).split("\r\n")[1];
     expect(row).toBe("D-2026-0009,A-1,1,6800,3,140.66,1.235,139,142.1,3.1,140.66,meets,,,");
   });
 
@@ -36,8 +39,8 @@ describe("numbers at the precision their measurement supports", () => {
     expect(timeDecimals({ num: 1001, den: 30000 })).toBe(2);
     const drop = {
       id: "d1", runId: "r1", serial: "A-1", round: 1, ordinal: 1, state: "agreed", testedAt: "2026-12-01T10:00:00.000Z", clipSha256: "ab", timeBase: { num: 1, den: 90000 },
-      readings: [{ slot: 1, reader: "A", dispenseFrame: 3, clearFrame: 99, timeS: 4.659999999999997 }, { slot: 2, reader: "B", dispenseFrame: 3, clearFrame: 100, timeS: 4.6933333333333 }],
-      timeS: 4.676666666666665, uncertaintyS: 0.027216552697590868, outlier: false,
+      readings: [{ slot: 1, reader: "A", dispenseFrame: 3, clearFrame: 99, timeS: 4.56 + 0.1 }, { slot: 2, reader: "B", dispenseFrame: 3, clearFrame: 100, timeS: 4.6933333333333 }],
+      timeS: 4.676666666666665, uncertaintyS: 0.0272165527, outlier: false,
     };
     const row = dropsCsv({ ...data([]), drops: [drop] } as unknown as ReportData).split("\r\n")[1];
     expect(row).toBe("D-2026-0009,A-1,1,r1,2026-12-01T10:00:00.000Z,1,agreed,A,B,3,99,3,100,4.66,4.693333,0.0272,4.676667,ab");

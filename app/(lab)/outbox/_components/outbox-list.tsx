@@ -10,6 +10,7 @@ function Linked({ text }: { text: string }) {
   return (
     <>
       {text.split(/(https?:\/\/\S+)/g).map((part, i) =>
+        // biome-ignore lint/suspicious/noArrayIndexKey: the parts of one fixed text, never reordered
         /^https?:\/\//.test(part) ? <a key={i} href={part} className="break-all font-semibold text-wick-700 underline">{part}</a> : part,
       )}
     </>

@@ -44,6 +44,7 @@ export function SubmissionFilters() {
   return (
     <section aria-labelledby="filters-heading" className="rounded-lg border border-ink-100 bg-white p-4 shadow-sm">
       <h2 id="filters-heading" className="sr-only">Filters</h2>
+      {/* biome-ignore lint/a11y/useSemanticElements: a search form; the <search> element is newer than some browsers labs keep */}
       <form role="search" aria-label="Filter submissions" onSubmit={(e) => { e.preventDefault(); search(q); }} className="grid gap-3 md:grid-cols-3 lg:grid-cols-4">
         <Field id="filter-q" label="Search reference or model" type="search" value={q} onChange={(e) => setQ(e.target.value)} maxLength={100} />
         <SelectField id="filter-organisation" label="Organisation" value={state.organisationId ?? ""} onChange={set("organisationId")} error={organisations.isError ? organisations.error.message : undefined}>

@@ -44,9 +44,11 @@ export function TrimPanel({ file, onTrimmed, onCancel }: { file: File; onTrimmed
   }
 
   return (
+    // biome-ignore lint/a11y/useSemanticElements: a labelled part of the upload panel, not a set of form fields
     <div role="group" aria-labelledby={`${id}-h`} className="space-y-3 rounded-md bg-ink-50 p-4">
       <h5 id={`${id}-h`} ref={heading} tabIndex={-1} className="font-semibold">Trim first</h5>
       {url && (
+        // biome-ignore lint/a11y/useMediaCaption: a silent recorder's footage, previewed to choose the cut: there is nothing to caption
         <video
           ref={video}
           src={url}
@@ -85,7 +87,7 @@ export function TrimPanel({ file, onTrimmed, onCancel }: { file: File; onTrimmed
         </p>
       )}
       {trim.line && (
-        <pre aria-label="Trimming tool output" className="overflow-x-auto whitespace-pre-wrap rounded bg-ink-900 p-2 font-mono text-xs text-ink-50">{trim.line}</pre>
+        <pre role="log" aria-label="Trimming tool output" className="overflow-x-auto whitespace-pre-wrap rounded bg-ink-900 p-2 font-mono text-xs text-ink-50">{trim.line}</pre>
       )}
     </div>
   );
