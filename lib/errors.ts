@@ -68,8 +68,7 @@ export function validationError(err: ZodError): AppError {
 
 /** Maps any thrown value to the single JSON error shape; unknown errors are logged, never echoed. */
 export function toResponse(err: unknown, requestId: string): Response {
-  const appErr =
-    err instanceof AppError ? err : err instanceof ZodError ? validationError(err) : undefined;
+  const appErr = err instanceof AppError ? err : err instanceof ZodError ? validationError(err) : undefined;
   if (appErr) {
     const body: ErrorBody = { error: { code: appErr.code, message: appErr.message, fields: appErr.fields, requestId } };
     return Response.json(body, { status: appErr.status, headers: { "x-request-id": requestId } });

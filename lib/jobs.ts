@@ -30,7 +30,13 @@ export function boss(): Promise<PgBoss> {
     b.on("error", (err) => console.error("pg-boss error", err));
     await b.start();
     for (const q of Object.values(QUEUES)) {
-      await b.createQueue(q.name, { name: q.name, retryLimit: q.retryLimit, retryDelay: q.retryDelay, retryBackoff: q.retryBackoff, expireInSeconds: env().CLIP_JOB_EXPIRE_SECONDS });
+      await b.createQueue(q.name, {
+        name: q.name,
+        retryLimit: q.retryLimit,
+        retryDelay: q.retryDelay,
+        retryBackoff: q.retryBackoff,
+        expireInSeconds: env().CLIP_JOB_EXPIRE_SECONDS,
+      });
     }
     return b;
   })();

@@ -10,16 +10,18 @@ export const num = (label: string) =>
     .pipe(z.number({ error: `${label} must be a number.` }));
 
 export const text = (label: string, max = 200) =>
-  z.string({ error: `${label} is required.` }).trim().min(1, `${label} is required.`).max(max, `${label} must be at most ${max} characters.`);
+  z
+    .string({ error: `${label} is required.` })
+    .trim()
+    .min(1, `${label} is required.`)
+    .max(max, `${label} must be at most ${max} characters.`);
 
-export const optionalText = (label: string, max = 2000) =>
-  z.string().trim().max(max, `${label} must be at most ${max} characters.`).default("");
+export const optionalText = (label: string, max = 2000) => z.string().trim().max(max, `${label} must be at most ${max} characters.`).default("");
 
 /** A UUID as the database makes them: the one pattern pages and routes test ids with. */
 export const UUID_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export const isoDate = (label: string) =>
-  z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` });
+export const isoDate = (label: string) => z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` });
 
 /** An instant with its zone (the browser converts local input before sending). */
 export const isoInstant = (label: string) =>

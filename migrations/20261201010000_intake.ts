@@ -80,7 +80,9 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
   });
   await knex.raw("create unique index samples_serial_key on samples (submission_id, lower(serial))");
-  await knex.raw("alter table samples add constraint samples_weight check (weight_g > 0 and weight_g < 20000), add constraint samples_round check (round >= 1)");
+  await knex.raw(
+    "alter table samples add constraint samples_weight check (weight_g > 0 and weight_g < 20000), add constraint samples_round check (round >= 1)",
+  );
 
   await knex.schema.createTable("runs", (t) => {
     t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));

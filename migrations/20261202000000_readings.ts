@@ -76,6 +76,17 @@ export async function up(knex: Knex): Promise<void> {
 export async function down(knex: Knex): Promise<void> {
   await knex.raw("drop table readings; drop function readings_submitted_are_final()");
   await knex.schema.alterTable("drops", (t) => {
-    t.dropColumns("clip_id", "start_frame", "placed_by", "placed_at", "state", "state_changed_at", "agreed_time_s", "time_difference_s", "dispense_difference_s", "clear_difference_s");
+    t.dropColumns(
+      "clip_id",
+      "start_frame",
+      "placed_by",
+      "placed_at",
+      "state",
+      "state_changed_at",
+      "agreed_time_s",
+      "time_difference_s",
+      "dispense_difference_s",
+      "clear_difference_s",
+    );
   });
 }

@@ -6,7 +6,18 @@ import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRo
 
 const NEXT_BIN = path.join(projectRoot, "node_modules", "next", "dist", "bin", "next");
 const TSX_LOADER = pathToFileURL(path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs")).href;
-const BUILD_INPUTS = ["app", "components", "lib", "public", "proxy.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json", "tsconfig.json"];
+const BUILD_INPUTS = [
+  "app",
+  "components",
+  "lib",
+  "public",
+  "proxy.ts",
+  "next.config.ts",
+  "tailwind.config.ts",
+  "postcss.config.mjs",
+  "package-lock.json",
+  "tsconfig.json",
+];
 
 function newestMtime(p: string): number {
   if (!fs.existsSync(p)) return 0;
@@ -36,10 +47,14 @@ export async function startNext(env: Record<string, string>, port: number, mode:
   const child = spawnLogged("next", process.execPath, [NEXT_BIN, mode, "-H", "127.0.0.1", "-p", String(port)], { logFile, env: { ...process.env, ...env } });
   const stop = () => stopChild(child, 8000);
   try {
-    await waitFor(async () => {
-      assertAlive(child, "next", logFile);
-      return httpAnswers(`http://127.0.0.1:${port}/api/health`);
-    }, mode === "dev" ? 120_000 : 30_000, `the app on port ${port} (log: ${logFile})`);
+    await waitFor(
+      async () => {
+        assertAlive(child, "next", logFile);
+        return httpAnswers(`http://127.0.0.1:${port}/api/health`);
+      },
+      mode === "dev" ? 120_000 : 30_000,
+      `the app on port ${port} (log: ${logFile})`,
+    );
   } catch (e) {
     await stop();
     throw e;
@@ -56,16 +71,23 @@ export async function startWorker(env: Record<string, string>, logFile: string):
   let child: ChildProcess;
   const launch = async () => {
     const offset = logSize(logFile);
-    child = spawnLogged("worker", process.execPath, ["--import", TSX_LOADER, path.join(projectRoot, "worker", "index.ts")], { logFile, env: { ...process.env, ...env } });
+    child = spawnLogged("worker", process.execPath, ["--import", TSX_LOADER, path.join(projectRoot, "worker", "index.ts")], {
+      logFile,
+      env: { ...process.env, ...env },
+    });
     child.once("exit", (code, signal) => {
       if (stopping) return;
       fs.appendFileSync(logFile, `--- worker exited (${signal ?? code}); starting it again\n`);
       setTimeout(() => void launch().catch((e) => console.error(`[wickmark] the worker did not restart: ${e}`)), 500);
     });
-    await waitFor(async () => {
-      assertAlive(child, "worker", logFile);
-      return logHasSince(logFile, offset, "worker: consuming");
-    }, 30_000, `the worker (log: ${logFile})`);
+    await waitFor(
+      async () => {
+        assertAlive(child, "worker", logFile);
+        return logHasSince(logFile, offset, "worker: consuming");
+      },
+      30_000,
+      `the worker (log: ${logFile})`,
+    );
   };
   const stop = async () => {
     stopping = true;

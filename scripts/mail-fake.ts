@@ -45,7 +45,10 @@ function keep(m: StoredMessage): void {
 }
 
 const addresses = (a: AddressObject | AddressObject[] | undefined): string[] =>
-  [a ?? []].flat().flatMap((o) => o.value.map((v) => v.address ?? "")).filter(Boolean);
+  [a ?? []]
+    .flat()
+    .flatMap((o) => o.value.map((v) => v.address ?? ""))
+    .filter(Boolean);
 
 const smtp = new SMTPServer({
   authOptional: true,
@@ -110,8 +113,9 @@ async function main(): Promise<void> {
   await listen(smtp, smtpPort);
   await listen(api, httpPort);
   smtp.on("error", (err) => console.error("mail-fake smtp error:", err.message));
-  console.log(`mail-fake: smtp 127.0.0.1:${smtpPort}, http 127.0.0.1:${httpPort}, ` +
-    `${messages.length} stored message(s)${storeFile ? ` in ${storeFile}` : ""}`);
+  console.log(
+    `mail-fake: smtp 127.0.0.1:${smtpPort}, http 127.0.0.1:${httpPort}, ` + `${messages.length} stored message(s)${storeFile ? ` in ${storeFile}` : ""}`,
+  );
 }
 
 function shutdown(): void {

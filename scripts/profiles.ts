@@ -22,8 +22,7 @@ export interface Profile {
 const dataRoot = path.join(projectRoot, ".data");
 // WICKMARK_PORT_OFFSET moves every port of both profiles, so two checkouts can run side by side.
 const offset = Number(process.env.WICKMARK_PORT_OFFSET ?? 0) || 0;
-const ports = (p: Profile["ports"]): Profile["ports"] =>
-  Object.fromEntries(Object.entries(p).map(([k, v]) => [k, v + offset])) as Profile["ports"];
+const ports = (p: Profile["ports"]): Profile["ports"] => Object.fromEntries(Object.entries(p).map(([k, v]) => [k, v + offset])) as Profile["ports"];
 const tmpKey = Buffer.from(projectRoot).toString("base64url").slice(-12);
 
 export const PROFILES: Record<Profile["name"], Profile> = {
@@ -51,6 +50,14 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     // Fewer rounds keep the many sign-ins of the suite quick; production keeps the default.
     bcryptRounds: 10,
     // Small parts so a test file spans several; quick expiry so a killed worker's job returns soon.
-    env: { CLIP_PART_SIZE_MB: "5", CLIP_JOB_EXPIRE_SECONDS: "20", JOB_MAINTENANCE_SECONDS: "2", OUTBOX_SWEEP_SECONDS: "2", OUTBOX_LEASE_SECONDS: "10", OUTBOX_RETRY_BASE_SECONDS: "1", REVIEWER_DIGEST_EVERY_SECONDS: "3" },
+    env: {
+      CLIP_PART_SIZE_MB: "5",
+      CLIP_JOB_EXPIRE_SECONDS: "20",
+      JOB_MAINTENANCE_SECONDS: "2",
+      OUTBOX_SWEEP_SECONDS: "2",
+      OUTBOX_LEASE_SECONDS: "10",
+      OUTBOX_RETRY_BASE_SECONDS: "1",
+      REVIEWER_DIGEST_EVERY_SECONDS: "3",
+    },
   },
 };

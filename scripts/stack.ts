@@ -33,17 +33,27 @@ export async function startStack(p: Profile, log: (s: string) => void): Promise<
 
     const t0 = Date.now();
     const pg = await startPostgres({
-      dataDir: pgDir, port: p.ports.pg, user: PG_USER, password: PG_PASSWORD, database: p.database, fast: p.fast,
+      dataDir: pgDir,
+      port: p.ports.pg,
+      user: PG_USER,
+      password: PG_PASSWORD,
+      database: p.database,
+      fast: p.fast,
       logFile: path.join(logs, "postgres.log"),
     });
     services.push(pg);
     const s3 = await startS3({
-      dataDir: path.join(p.dataDir, "s3"), port: p.ports.s3, buckets: [p.bucket],
-      corsOrigins: [appUrl, `http://localhost:${p.ports.app}`], logFile: path.join(logs, "s3.log"),
+      dataDir: path.join(p.dataDir, "s3"),
+      port: p.ports.s3,
+      buckets: [p.bucket],
+      corsOrigins: [appUrl, `http://localhost:${p.ports.app}`],
+      logFile: path.join(logs, "s3.log"),
     });
     services.push(s3);
     const mail = await startMailFake({
-      smtpPort: p.ports.smtp, httpPort: p.ports.mailApi, storeFile: path.join(p.dataDir, "mail.jsonl"),
+      smtpPort: p.ports.smtp,
+      httpPort: p.ports.mailApi,
+      storeFile: path.join(p.dataDir, "mail.jsonl"),
       logFile: path.join(logs, "mail.log"),
     });
     services.push(mail);

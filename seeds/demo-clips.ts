@@ -51,7 +51,9 @@ async function placeDemoDrops(knex: Knex, runId: string, clipId: string, truthFi
   for (const d of drops) {
     const t = truth.drops[d.ordinal - 1];
     if (!t) continue;
-    await knex("drops").where({ id: d.id }).update({ clip_id: clipId, start_frame: Math.max(0, t.dispenseFrame - 30), placed_by: placedBy, placed_at: knex.fn.now() });
+    await knex("drops")
+      .where({ id: d.id })
+      .update({ clip_id: clipId, start_frame: Math.max(0, t.dispenseFrame - 30), placed_by: placedBy, placed_at: knex.fn.now() });
   }
   if (drops.length) log(`demo drops placed on their recording; reviewers find them in the reading queue`);
 }

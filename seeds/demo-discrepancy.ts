@@ -26,13 +26,22 @@ export async function readDisagreeing(knex: Knex, dropId: string, first: Marks, 
 /** After the demo recordings are placed: the discrepancy, once its drop sits on its recording. */
 export async function seedDemoDiscrepancy(knex: Knex, dataDir: string, log: (s: string) => void): Promise<void> {
   const { serial, ordinal, clearLaterS } = DEMO_DISCREPANCY;
-  const drop = await knex("drops as d").join("runs as r", "r.id", "d.run_id").join("samples as x", "x.id", "r.sample_id")
-    .where({ "x.serial": serial, "d.ordinal": ordinal }).whereNotNull("d.clip_id").first("d.id", "d.state");
+  const drop = await knex("drops as d")
+    .join("runs as r", "r.id", "d.run_id")
+    .join("samples as x", "x.id", "r.sample_id")
+    .where({ "x.serial": serial, "d.ordinal": ordinal })
+    .whereNotNull("d.clip_id")
+    .first("d.id", "d.state");
   const truthFile = path.join(dataDir, `${serial}.mp4.truth.json`);
   if (drop?.state !== "unread" || !existsSync(truthFile)) return;
   const truth = JSON.parse(readFileSync(truthFile, "utf8")) as Truth;
   const t = truth.drops[ordinal - 1];
   const rate = parseRate(truth.options.fps);
-  const state = await readDisagreeing(knex, drop.id, { dispenseFrame: t.dispenseFrame, clearFrame: t.clearFrame }, Math.round((clearLaterS * rate.num) / rate.den));
+  const state = await readDisagreeing(
+    knex,
+    drop.id,
+    { dispenseFrame: t.dispenseFrame, clearFrame: t.clearFrame },
+    Math.round((clearLaterS * rate.num) / rate.den),
+  );
   log(`demo discrepancy: ${serial} drop ${ordinal} read by both reviewers (${state}); a lead finds it among the discrepancies`);
 }

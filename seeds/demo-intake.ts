@@ -54,26 +54,67 @@ interface DemoSubmission {
 const sample = (serial: string, weightG: number, round = 1, acclimatedH: number | null = null) => ({ serial, weightG, round, acclimatedH });
 
 const SUBMISSIONS: DemoSubmission[] = [
-  { reference: "D-2026-0001", org: "Tallowby Ball Works (invented)", model: "Quarry Comet (invented)", kind: "approval", round: 1, status: "testing", receivedOn: "2026-11-02",
-    samples: [sample("QC-1001", 7257.48, 1, 30), sample("QC-1002", 7241.9, 1, 30)] },
-  { reference: "D-2026-0002", org: "Tallowby Ball Works (invented)", model: "Hollow Lantern (invented)", kind: "approval", round: 2, status: "testing", receivedOn: "2026-10-12",
+  {
+    reference: "D-2026-0001",
+    org: "Tallowby Ball Works (invented)",
+    model: "Quarry Comet (invented)",
+    kind: "approval",
+    round: 1,
+    status: "testing",
+    receivedOn: "2026-11-02",
+    samples: [sample("QC-1001", 7257.48, 1, 30), sample("QC-1002", 7241.9, 1, 30)],
+  },
+  {
+    reference: "D-2026-0002",
+    org: "Tallowby Ball Works (invented)",
+    model: "Hollow Lantern (invented)",
+    kind: "approval",
+    round: 2,
+    status: "testing",
+    receivedOn: "2026-10-12",
     samples: [
       sample("HL-2001", 6803.89, 1, 28),
       sample("HL-2002", 6795.2, 1, 28),
       // Every ball has its run. The first round-2 ball was tested after only 14 h in the room: the
       // demo's condition warning; the others after a day or more.
       ...Array.from({ length: 8 }, (_, i) => sample(`HL-21${String(i + 1).padStart(2, "0")}`, 6790 + i * 3.5, 2, i === 0 ? 14 : 25 + i)),
-    ] },
-  { reference: "D-2026-0003", org: SECOND_ORGANISATION, model: "Marsh Ember (invented)", kind: "approval", round: 1, status: "received", receivedOn: "2026-11-20",
-    samples: [sample("ME-0301", 6350.29), sample("ME-0302", 6361.0)] },
-  { reference: "D-2026-0004", org: "Tallowby Ball Works (invented)", model: "Quarry Comet (invented)", kind: "surveillance", round: 1, status: "received", receivedOn: "2026-11-25", approval: "D-2026-0001",
-    samples: [sample("QC-S-01", 7250.1)] },
+    ],
+  },
+  {
+    reference: "D-2026-0003",
+    org: SECOND_ORGANISATION,
+    model: "Marsh Ember (invented)",
+    kind: "approval",
+    round: 1,
+    status: "received",
+    receivedOn: "2026-11-20",
+    samples: [sample("ME-0301", 6350.29), sample("ME-0302", 6361.0)],
+  },
+  {
+    reference: "D-2026-0004",
+    org: "Tallowby Ball Works (invented)",
+    model: "Quarry Comet (invented)",
+    kind: "surveillance",
+    round: 1,
+    status: "received",
+    receivedOn: "2026-11-25",
+    approval: "D-2026-0001",
+    samples: [sample("QC-S-01", 7250.1)],
+  },
 ];
 
 export async function seedIntake(knex: Knex): Promise<void> {
-  await knex("organisations").insert({ name: SECOND_ORGANISATION, contact_emails: ["results@brindlecombe.test"] }).onConflict(knex.raw("(lower(name))")).ignore();
-  await knex("organisations").whereRaw("lower(name) = lower(?)", ["Tallowby Ball Works (invented)"]).update({ contact_emails: ["approvals@tallowby.test"] });
-  await knex("specification_editions").insert({ ...DEMO_EDITION, sources: JSON.stringify(DEMO_EDITION.sources) }).onConflict(knex.raw("(lower(name))")).ignore();
+  await knex("organisations")
+    .insert({ name: SECOND_ORGANISATION, contact_emails: ["results@brindlecombe.test"] })
+    .onConflict(knex.raw("(lower(name))"))
+    .ignore();
+  await knex("organisations")
+    .whereRaw("lower(name) = lower(?)", ["Tallowby Ball Works (invented)"])
+    .update({ contact_emails: ["approvals@tallowby.test"] });
+  await knex("specification_editions")
+    .insert({ ...DEMO_EDITION, sources: JSON.stringify(DEMO_EDITION.sources) })
+    .onConflict(knex.raw("(lower(name))"))
+    .ignore();
   const edition = await knex("specification_editions").whereRaw("lower(name) = lower(?)", [DEMO_EDITION.name]).first("id");
   const technician = await knex("users").where({ email: "technician@marrowfield.test" }).first("id");
 
@@ -87,8 +128,18 @@ export async function seedIntake(knex: Knex): Promise<void> {
     const org = await knex("organisations").whereRaw("lower(name) = lower(?)", [s.org]).first("id");
     const approval = s.approval ? await knex("submissions").where({ reference: s.approval }).first("id") : null;
     const [{ id }] = await knex("submissions")
-      .insert({ reference: s.reference, organisation_id: org.id, model_name: s.model, kind: s.kind, weight_classes_lb: [14, 15, 16], received_on: s.receivedOn,
-        edition_id: edition.id, status: s.status, current_round: s.round, approval_submission_id: approval?.id ?? null })
+      .insert({
+        reference: s.reference,
+        organisation_id: org.id,
+        model_name: s.model,
+        kind: s.kind,
+        weight_classes_lb: [14, 15, 16],
+        received_on: s.receivedOn,
+        edition_id: edition.id,
+        status: s.status,
+        current_round: s.round,
+        approval_submission_id: approval?.id ?? null,
+      })
       .returning("id");
     for (const x of s.samples) {
       const receivedAt = new Date(`${s.receivedOn}T09:00:00Z`);
@@ -105,8 +156,21 @@ export async function seedIntake(knex: Knex): Promise<void> {
 async function insertDemoRun(knex: Knex, sampleId: string, acclimationStart: Date, acclimatedH: number, technicianId: string): Promise<void> {
   const testedAt = new Date(acclimationStart.getTime() + acclimatedH * 3_600_000);
   const [{ id: runId }] = await knex("runs")
-    .insert({ sample_id: sampleId, tested_at: testedAt, technician_id: technicianId, room_temp_c: 22.5, surface_temp_c: 22.1, prep_method: "Demo preparation: wiped, abraded, wiped (invented)",
-      prep_abrasive: "Demo pad 500", prep_pad_position: "cycle 3 of 10", roughness_ra_um: [0.42, 0.45, 0.44], oil_lot: "DEMO-OIL-7", dispenser_check_value: 12.1, dispenser_check_unit: "mg", camera_id: "CAM-A" })
+    .insert({
+      sample_id: sampleId,
+      tested_at: testedAt,
+      technician_id: technicianId,
+      room_temp_c: 22.5,
+      surface_temp_c: 22.1,
+      prep_method: "Demo preparation: wiped, abraded, wiped (invented)",
+      prep_abrasive: "Demo pad 500",
+      prep_pad_position: "cycle 3 of 10",
+      roughness_ra_um: [0.42, 0.45, 0.44],
+      oil_lot: "DEMO-OIL-7",
+      dispenser_check_value: 12.1,
+      dispenser_check_unit: "mg",
+      camera_id: "CAM-A",
+    })
     .returning("id");
   await knex("drops").insert([1, 2, 3].map((ordinal) => ({ run_id: runId, ordinal })));
 }
@@ -114,7 +178,8 @@ async function insertDemoRun(knex: Knex, sampleId: string, acclimationStart: Dat
 async function addMissingRuns(knex: Knex, submissionId: string, s: DemoSubmission, technicianId: string): Promise<void> {
   for (const x of s.samples) {
     if (x.acclimatedH === null) continue;
-    const row = await knex("samples as x").where({ "x.submission_id": submissionId, "x.serial": x.serial })
+    const row = await knex("samples as x")
+      .where({ "x.submission_id": submissionId, "x.serial": x.serial })
       .first("x.id", "x.acclimation_started_at", knex.raw("exists (select 1 from runs r where r.sample_id = x.id) as has_run"));
     if (row && !row.has_run && row.acclimation_started_at) await insertDemoRun(knex, row.id, new Date(row.acclimation_started_at), x.acclimatedH, technicianId);
   }

@@ -22,8 +22,12 @@ export interface DemoBall {
 export const DEMO_BALLS: DemoBall[] = [
   { serial: "HL-2001", seed: 201, durations: [151.2, 148.7, 153.4] }, // mean 151.10
   { serial: "HL-2002", seed: 202, durations: [143.1, 140.6, 145.2] }, // mean 142.97, guard band
-  { serial: "HL-2101", seed: 211, durations: [139.4, 141.8, 137.9], // mean 139.70, guard band
-    acceptReason: "Acclimation 14 h: accepted for the demo; conditions otherwise within the edition." },
+  {
+    serial: "HL-2101",
+    seed: 211,
+    durations: [139.4, 141.8, 137.9], // mean 139.70, guard band
+    acceptReason: "Acclimation 14 h: accepted for the demo; conditions otherwise within the edition.",
+  },
   { serial: "HL-2102", seed: 212, durations: [157.6, 160.3, 158.8] }, // mean 158.90
   { serial: "HL-2103", seed: 213, durations: [147.9, 150.2, 146.4] }, // mean 148.17
   { serial: "HL-2104", seed: 214, durations: [146.0, 146.1, 158.9] }, // mean 150.33, one outlying drop

@@ -50,7 +50,6 @@ export async function seedDemoReadings(knex: Knex, dataDir: string, log: (s: str
   });
 }
 
-
 interface Pending {
   ball: DemoBall;
   index: number;
@@ -70,8 +69,12 @@ async function seedUnderLock(knex: Knex, dataDir: string, log: (s: string) => vo
   mkdirSync(dataDir, { recursive: true });
   const pending: Pending[] = [];
   for (const [index, ball] of DEMO_BALLS.entries()) {
-    const run = await knex("runs as r").join("samples as x", "x.id", "r.sample_id").join("submissions as s", "s.id", "x.submission_id")
-      .where({ "s.reference": DEMO_READ_SUBMISSION, "x.serial": ball.serial }).orderBy("r.created_at").first("r.id");
+    const run = await knex("runs as r")
+      .join("samples as x", "x.id", "r.sample_id")
+      .join("submissions as s", "s.id", "x.submission_id")
+      .where({ "s.reference": DEMO_READ_SUBMISSION, "x.serial": ball.serial })
+      .orderBy("r.created_at")
+      .first("r.id");
     if (!run) {
       problem(`${ball.serial} has no run, so nothing to read`);
       continue;
@@ -90,14 +93,20 @@ async function seedUnderLock(knex: Knex, dataDir: string, log: (s: string) => vo
       problem(`${p.ball.serial} stopped: ${e instanceof Error ? e.message : e}`);
     }
   }
-  if (pending.length) log(`demo readings: ${pending.length} balls of ${DEMO_READ_SUBMISSION} done, ${result.readingsSubmitted} readings submitted, in ${secs(Date.now() - t0)} s`);
+  if (pending.length)
+    log(
+      `demo readings: ${pending.length} balls of ${DEMO_READ_SUBMISSION} done, ${result.readingsSubmitted} readings submitted, in ${secs(Date.now() - t0)} s`,
+    );
   else if (!result.problems.length) log(`demo readings of ${DEMO_READ_SUBMISSION} are already there`);
   return result;
 }
 
 /** Nothing left for this ball: every drop read twice (or further on), and any flagged run accepted. */
 async function runIsDone(knex: Knex, runId: string, ball: DemoBall, lead: Actor): Promise<boolean> {
-  const open = await knex("drops").where({ run_id: runId }).where((w) => w.whereNull("clip_id").orWhereIn("state", ["unread", "read once"])).first("id");
+  const open = await knex("drops")
+    .where({ run_id: runId })
+    .where((w) => w.whereNull("clip_id").orWhereIn("state", ["unread", "read once"]))
+    .first("id");
   if (open) return false;
   if (!ball.acceptReason) return true;
   const run = await getRun(lead, runId);
@@ -105,8 +114,19 @@ async function runIsDone(knex: Knex, runId: string, ball: DemoBall, lead: Actor)
 }
 
 /** The demo recording of this run: the one ingested before, or rendered (unless on disk) and ingested now. */
-async function demoClipOf(knex: Knex, runId: string, ball: DemoBall, dataDir: string, uploadedBy: string, o: DemoReadingsOptions, timing: DemoClipTiming, log: (s: string) => void) {
-  const existing = (await listClipsOfRun(knex, runId)).find((c) => c.originalName.startsWith(`demo-${ball.serial}-`) && c.status !== "rejected" && c.status !== "failed");
+async function demoClipOf(
+  knex: Knex,
+  runId: string,
+  ball: DemoBall,
+  dataDir: string,
+  uploadedBy: string,
+  o: DemoReadingsOptions,
+  timing: DemoClipTiming,
+  log: (s: string) => void,
+) {
+  const existing = (await listClipsOfRun(knex, runId)).find(
+    (c) => c.originalName.startsWith(`demo-${ball.serial}-`) && c.status !== "rejected" && c.status !== "failed",
+  );
   if (existing) return { clipId: existing.id, clipName: existing.originalName };
   const width = o.width ?? 320;
   const height = o.height ?? 180;
@@ -115,7 +135,17 @@ async function demoClipOf(knex: Knex, runId: string, ball: DemoBall, dataDir: st
   const file = path.join(dataDir, clipName);
   if (!existsSync(`${file}.truth.json`)) {
     const t = Date.now();
-    await renderSyntheticClip({ out: file, fps, seed: ball.seed, drops: 3, durations: ball.durations, length: clipLengthS(ball.durations), width, height, noise: o.noise ?? 6 });
+    await renderSyntheticClip({
+      out: file,
+      fps,
+      seed: ball.seed,
+      drops: 3,
+      durations: ball.durations,
+      length: clipLengthS(ball.durations),
+      width,
+      height,
+      noise: o.noise ?? 6,
+    });
     timing.renderS = secs(Date.now() - t);
     log(`demo readings: recording of ${ball.serial} rendered in ${timing.renderS} s; the worker is processing it`);
   }
@@ -139,9 +169,11 @@ async function settleAndRead(knex: Knex, p: Pending, dataDir: string, cast: Cast
     throw new Error(`its recording ${p.clipName} is ${status}, not ready, after waiting up to ${timeoutS} s (${detail}); see the worker log`);
   }
   await workerTiming(knex, p.clipId, p.timing);
-  if (p.timing.workerS !== null) log(`demo readings: recording of ${p.ball.serial} ready (worker busy ${p.timing.workerS} s, ${p.timing.workerWallS} s from upload)`);
+  if (p.timing.workerS !== null)
+    log(`demo readings: recording of ${p.ball.serial} ready (worker busy ${p.timing.workerS} s, ${p.timing.workerWallS} s from upload)`);
   const truthFile = path.join(dataDir, `${p.clipName}.truth.json`);
-  if (!existsSync(truthFile)) throw new Error(`${truthFile} is missing, so the true frames of its drops are unknown; remove the recording from the run or restore the file`);
+  if (!existsSync(truthFile))
+    throw new Error(`${truthFile} is missing, so the true frames of its drops are unknown; remove the recording from the run or restore the file`);
   const truth = JSON.parse(readFileSync(truthFile, "utf8")) as Truth;
   const rate = parseRate(truth.options.fps);
   const drops = await knex("drops").where({ run_id: p.runId }).orderBy("ordinal").select("id", "ordinal", "clip_id");
@@ -165,12 +197,14 @@ async function settleAndRead(knex: Knex, p: Pending, dataDir: string, cast: Cast
   return submitted;
 }
 
-
 async function workerTiming(knex: Knex, clipId: string, timing: DemoClipTiming): Promise<void> {
-  const row = await knex("clip_steps as s").join("clips as c", "c.id", "s.clip_id").where("s.clip_id", clipId).first(
-    knex.raw("sum(extract(epoch from s.finished_at - s.started_at)) as busy"),
-    knex.raw("extract(epoch from max(c.ready_at) - max(c.uploaded_at)) as wall"),
-  );
+  const row = await knex("clip_steps as s")
+    .join("clips as c", "c.id", "s.clip_id")
+    .where("s.clip_id", clipId)
+    .first(
+      knex.raw("sum(extract(epoch from s.finished_at - s.started_at)) as busy"),
+      knex.raw("extract(epoch from max(c.ready_at) - max(c.uploaded_at)) as wall"),
+    );
   timing.workerS = row?.busy == null ? null : Math.round(Number(row.busy) * 10) / 10;
   timing.workerWallS = row?.wall == null ? null : Math.round(Number(row.wall) * 10) / 10;
 }

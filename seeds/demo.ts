@@ -27,10 +27,13 @@ export async function seed(knex: Knex): Promise<void> {
   for (const u of DEMO_USERS) {
     const orgName = "organisation" in u ? u.organisation : null;
     const org = orgName ? await knex("organisations").whereRaw("lower(name) = lower(?)", [orgName]).first("id") : null;
-    await knex.raw(
-      "insert into users (email, name, roles, organisation_id, password_hash) values (?, ?, ?, ?, ?) on conflict ((lower(email))) do nothing",
-      [u.email, u.name, [...u.roles], org?.id ?? null, hash],
-    );
+    await knex.raw("insert into users (email, name, roles, organisation_id, password_hash) values (?, ?, ?, ?, ?) on conflict ((lower(email))) do nothing", [
+      u.email,
+      u.name,
+      [...u.roles],
+      org?.id ?? null,
+      hash,
+    ]);
   }
   await seedIntake(knex);
 }

@@ -20,7 +20,9 @@ async function main() {
   // The reviewers' digest: a pg-boss schedule (one job per tick however many workers run), or, when
   // REVIEWER_DIGEST_EVERY_SECONDS is set (tests, demos), a job every N seconds from each worker.
   const every = env().REVIEWER_DIGEST_EVERY_SECONDS;
-  const digest = every ? setInterval(() => void enqueue("reviewerDigest", {}).catch((err) => console.error("worker: digest job not queued", err)), every * 1000) : undefined;
+  const digest = every
+    ? setInterval(() => void enqueue("reviewerDigest", {}).catch((err) => console.error("worker: digest job not queued", err)), every * 1000)
+    : undefined;
   if (every) await b.unschedule(QUEUES.reviewerDigest.name);
   else await b.schedule(QUEUES.reviewerDigest.name, digestCron(env().REVIEWER_DIGEST_AT), {}, { tz: "UTC" });
   // Lets a test (or an operator) find and signal this very process.

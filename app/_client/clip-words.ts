@@ -6,7 +6,6 @@ export { containerName } from "@/lib/clips/media-names";
 
 type Index = NonNullable<ClipView["index"]>;
 
-
 /** 1800 → "1 800": groups of three with a narrow no-break space (SI style), so a number never wraps. */
 export function groupDigits(n: number): string {
   return String(Math.round(n)).replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");

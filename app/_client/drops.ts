@@ -64,5 +64,7 @@ export function useDiscardDraft() {
 }
 
 export function useStartCorrection() {
-  return useDropChange((v: { readingId: string; reason: string }) => fetchJson(`/api/readings/${v.readingId}/corrections`, { method: "POST", body: { reason: v.reason } }));
+  return useDropChange((v: { readingId: string; reason: string }) =>
+    fetchJson(`/api/readings/${v.readingId}/corrections`, { method: "POST", body: { reason: v.reason } }),
+  );
 }

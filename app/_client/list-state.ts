@@ -26,7 +26,7 @@ export interface ListState {
 export const DEFAULT_LIST: ListState = { page: 1, pageSize: 20, sort: "received", dir: "desc" };
 
 const DAY = /^\d{4}-\d{2}-\d{2}$/;
-const oneOf = <T extends string>(list: readonly T[], v: string | null): T | undefined => (list as readonly string[]).includes(v ?? "") ? (v as T) : undefined;
+const oneOf = <T extends string>(list: readonly T[], v: string | null): T | undefined => ((list as readonly string[]).includes(v ?? "") ? (v as T) : undefined);
 const whole = (v: string | null, min: number, max: number): number | undefined => {
   const n = Number(v);
   return v && Number.isInteger(n) && n >= min && n <= max ? n : undefined;

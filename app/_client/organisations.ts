@@ -18,7 +18,9 @@ export function useSaveOrganisation(id: string | null) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: OrganisationInput) =>
-      fetchJson<{ organisation: OrganisationRow }>(id ? `/api/organisations/${id}` : "/api/organisations", { method: id ? "PATCH" : "POST", body: input }).then((r) => r.organisation),
+      fetchJson<{ organisation: OrganisationRow }>(id ? `/api/organisations/${id}` : "/api/organisations", { method: id ? "PATCH" : "POST", body: input }).then(
+        (r) => r.organisation,
+      ),
     onSuccess: () => qc.invalidateQueries({ queryKey: ORGANISATIONS }),
   });
 }

@@ -9,7 +9,12 @@ export function Downloads({ id }: { id: string }) {
   return (
     <nav aria-label="Report and exports" className="flex flex-wrap gap-3">
       {FILES.map((f) => (
-        <a key={f.file} href={`/api/submissions/${id}/${f.file}`} download className="rounded border border-wick-700 px-3 py-1.5 text-sm font-semibold text-wick-700 hover:bg-wick-100">
+        <a
+          key={f.file}
+          href={`/api/submissions/${id}/${f.file}`}
+          download
+          className="rounded border border-wick-700 px-3 py-1.5 text-sm font-semibold text-wick-700 hover:bg-wick-100"
+        >
           {f.label}
         </a>
       ))}

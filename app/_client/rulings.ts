@@ -10,7 +10,10 @@ export type { RulingView };
 const rulingKey = (dropId: string) => [...DROPS, "ruling", dropId] as const;
 
 export function useRuling(dropId: string) {
-  return useQuery({ queryKey: rulingKey(dropId), queryFn: () => fetchJson<{ ruling: RulingView | null }>(`/api/drops/${dropId}/ruling`).then((r) => r.ruling) });
+  return useQuery({
+    queryKey: rulingKey(dropId),
+    queryFn: () => fetchJson<{ ruling: RulingView | null }>(`/api/drops/${dropId}/ruling`).then((r) => r.ruling),
+  });
 }
 
 export function useRuleDrop(dropId: string) {

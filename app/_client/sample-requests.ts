@@ -11,13 +11,17 @@ export type { SampleRequest };
 const key = (submissionId: string) => ["sample-requests", submissionId] as const;
 
 export function useSampleRequests(submissionId: string) {
-  return useQuery({ queryKey: key(submissionId), queryFn: () => fetchJson<{ requests: SampleRequest[] }>(`/api/submissions/${submissionId}/sample-requests`).then((r) => r.requests) });
+  return useQuery({
+    queryKey: key(submissionId),
+    queryFn: () => fetchJson<{ requests: SampleRequest[] }>(`/api/submissions/${submissionId}/sample-requests`).then((r) => r.requests),
+  });
 }
 
 export function useRequestSamples(submissionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: SampleRequestInput) => fetchJson<{ request: SampleRequest }>(`/api/submissions/${submissionId}/sample-requests`, { method: "POST", body }),
+    mutationFn: (body: SampleRequestInput) =>
+      fetchJson<{ request: SampleRequest }>(`/api/submissions/${submissionId}/sample-requests`, { method: "POST", body }),
     onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: key(submissionId) }), qc.invalidateQueries({ queryKey: SUBMISSIONS })]),
   });
 }
@@ -25,7 +29,8 @@ export function useRequestSamples(submissionId: string) {
 export function useAcknowledgeRequest(submissionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...body }: AcknowledgeInput & { id: string }) => fetchJson<{ request: SampleRequest }>(`/api/sample-requests/${id}/acknowledge`, { method: "POST", body }),
+    mutationFn: ({ id, ...body }: AcknowledgeInput & { id: string }) =>
+      fetchJson<{ request: SampleRequest }>(`/api/sample-requests/${id}/acknowledge`, { method: "POST", body }),
     onSuccess: () => qc.invalidateQueries({ queryKey: key(submissionId) }),
   });
 }
@@ -34,6 +39,9 @@ export function useAcknowledgeRequest(submissionId: string) {
 export function useNextRound(submissionId: string) {
   return useQuery({
     queryKey: ["results", submissionId, "next-round"],
-    queryFn: () => fetchJson<{ decision: { nextRound: { round: number; size: number } | null } }>(`/api/submissions/${submissionId}/results`).then((r) => r.decision?.nextRound ?? null),
+    queryFn: () =>
+      fetchJson<{ decision: { nextRound: { round: number; size: number } | null } }>(`/api/submissions/${submissionId}/results`).then(
+        (r) => r.decision?.nextRound ?? null,
+      ),
   });
 }

@@ -12,14 +12,18 @@ export type SignatureView = SignOffView["signatures"][number];
 const signOffKey = (id: string) => ["signoff", id] as const;
 
 export function useSignOff(submissionId: string) {
-  return useQuery({ queryKey: signOffKey(submissionId), queryFn: () => fetchJson<{ signOff: SignOffView }>(`/api/submissions/${submissionId}/signoff`).then((r) => r.signOff) });
+  return useQuery({
+    queryKey: signOffKey(submissionId),
+    queryFn: () => fetchJson<{ signOff: SignOffView }>(`/api/submissions/${submissionId}/signoff`).then((r) => r.signOff),
+  });
 }
 
 // Signing and re-opening change the submission's status and its drops' states: what shows them is asked again.
 function useSignOffChange<T>(submissionId: string, path: "signoff" | "reopen") {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: T) => fetchJson<{ signOff: SignOffView }>(`/api/submissions/${submissionId}/${path}`, { method: "POST", body: input }).then((r) => r.signOff),
+    mutationFn: (input: T) =>
+      fetchJson<{ signOff: SignOffView }>(`/api/submissions/${submissionId}/${path}`, { method: "POST", body: input }).then((r) => r.signOff),
     onSuccess: (view) => {
       qc.setQueryData(signOffKey(submissionId), view);
       void qc.invalidateQueries({ queryKey: ["results", submissionId] });

@@ -49,7 +49,11 @@ export function ChartFigure({
     <figure className="space-y-3 rounded-lg border border-ink-100 bg-white p-4 shadow-sm">
       <figcaption>
         <span className="block text-lg font-semibold text-ink-900">{title}</span>
-        {description && <span id={descId} className="mt-1 block max-w-3xl text-sm text-ink-600">{description}</span>}
+        {description && (
+          <span id={descId} className="mt-1 block max-w-3xl text-sm text-ink-600">
+            {description}
+          </span>
+        )}
       </figcaption>
       <div role="img" aria-label={alt} aria-describedby={description ? descId : undefined} data-chart="">
         {children}
@@ -61,7 +65,13 @@ export function ChartFigure({
           <table className="w-full text-left text-sm">
             <caption className="sr-only">{table.caption ?? title}</caption>
             <thead className="sticky top-0 bg-ink-50 text-ink-600">
-              <tr>{table.columns.map((c, i) => <th key={c} scope="col" className={`px-3 py-2 font-semibold ${right[i] ? "text-right" : ""}`}>{c}</th>)}</tr>
+              <tr>
+                {table.columns.map((c, i) => (
+                  <th key={c} scope="col" className={`px-3 py-2 font-semibold ${right[i] ? "text-right" : ""}`}>
+                    {c}
+                  </th>
+                ))}
+              </tr>
             </thead>
             <tbody>
               {table.rows.map((row, i) => (
@@ -69,12 +79,18 @@ export function ChartFigure({
                 <tr key={i} className="border-t border-ink-100">
                   {row.map((v, j) => (
                     // biome-ignore lint/suspicious/noArrayIndexKey: cells in column order, rebuilt whole with the row
-                    <td key={j} className={`px-3 py-1.5 ${right[j] ? "text-right tabular-nums" : ""}`}>{String(v)}</td>
+                    <td key={j} className={`px-3 py-1.5 ${right[j] ? "text-right tabular-nums" : ""}`}>
+                      {String(v)}
+                    </td>
                   ))}
                 </tr>
               ))}
               {table.rows.length === 0 && (
-                <tr><td colSpan={table.columns.length} className="px-3 py-4 text-center text-ink-600">Nothing to show.</td></tr>
+                <tr>
+                  <td colSpan={table.columns.length} className="px-3 py-4 text-center text-ink-600">
+                    Nothing to show.
+                  </td>
+                </tr>
               )}
             </tbody>
           </table>

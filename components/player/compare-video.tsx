@@ -33,7 +33,18 @@ export function CompareVideo({ src, frames, offsetPts, frame, label }: Props) {
   const proven = state.status === "confirmed" && state.frame === frame;
   return (
     <>
-      <video ref={setEl} src={src} crossOrigin="anonymous" muted playsInline preload="auto" tabIndex={-1} aria-label={label} data-testid="compare-video" className="absolute inset-0 h-full w-full object-contain" />
+      <video
+        ref={setEl}
+        src={src}
+        crossOrigin="anonymous"
+        muted
+        playsInline
+        preload="auto"
+        tabIndex={-1}
+        aria-label={label}
+        data-testid="compare-video"
+        className="absolute inset-0 h-full w-full object-contain"
+      />
       {!proven && (
         <p className="absolute inset-x-0 bottom-0 bg-ink-900/80 px-2 py-1 text-xs text-white">
           {state.status === "unconfirmed" ? "The reference picture could not be matched to its frame." : "Finding the reference frame…"}

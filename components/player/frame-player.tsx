@@ -62,26 +62,22 @@ export default function FramePlayer(props: FramePlayerProps) {
     engine.engine?.playbackRate(speed);
   }, [engine.engine, speed]);
 
-  useImperativeHandle(
-    props.controlRef,
-    () => {
-      const check = () => {
-        const s = seekerRef.current?.current;
-        const video = engine.video;
-        return s && video ? markCheck({ status: s.status, frame: s.frame, paused: video.paused }) : ({ ok: false, reason: MARK_REASONS.loading } as const);
-      };
-      return {
-        confirmedFrame: () => {
-          const c = check();
-          return c.ok ? c.frame : null;
-        },
-        markCheck: check,
-        goToFrame: (f: number) => seekerRef.current?.seek(f),
-        focus: focusSurface,
-      };
-    },
-    [seekerRef, focusSurface, engine.video],
-  );
+  useImperativeHandle(props.controlRef, () => {
+    const check = () => {
+      const s = seekerRef.current?.current;
+      const video = engine.video;
+      return s && video ? markCheck({ status: s.status, frame: s.frame, paused: video.paused }) : ({ ok: false, reason: MARK_REASONS.loading } as const);
+    };
+    return {
+      confirmedFrame: () => {
+        const c = check();
+        return c.ok ? c.frame : null;
+      },
+      markCheck: check,
+      goToFrame: (f: number) => seekerRef.current?.seek(f),
+      focus: focusSurface,
+    };
+  }, [seekerRef, focusSurface, engine.video]);
 
   return (
     <section
@@ -93,7 +89,11 @@ export default function FramePlayer(props: FramePlayerProps) {
       data-target={state.target ?? ""}
       className="space-y-3 rounded-lg border border-ink-100 bg-white p-4 shadow-sm"
     >
-      {engine.error && <p role="alert" className="rounded-md border-l-4 border-bad-700 bg-bad-100 px-4 py-2 text-sm text-bad-700">{engine.error}</p>}
+      {engine.error && (
+        <p role="alert" className="rounded-md border-l-4 border-bad-700 bg-bad-100 px-4 py-2 text-sm text-bad-700">
+          {engine.error}
+        </p>
+      )}
       <PlayerPicture
         hostRef={engine.hostRef}
         surfaceRef={surfaceRef}
@@ -111,13 +111,26 @@ export default function FramePlayer(props: FramePlayerProps) {
       {state.status === "unconfirmed" && (
         <div role="alert" className="flex flex-wrap items-center gap-3 rounded-md border-l-4 border-bad-700 bg-bad-100 px-4 py-2 text-sm text-bad-700">
           <span>{NOT_MATCHED}</span>
-          <button type="button" className="rounded-md border border-bad-700 bg-white px-2 py-1 text-xs font-semibold" onClick={() => seekerRef.current?.seek(state.target ?? 0)}>
+          <button
+            type="button"
+            className="rounded-md border border-bad-700 bg-white px-2 py-1 text-xs font-semibold"
+            onClick={() => seekerRef.current?.seek(state.target ?? 0)}
+          >
             Try frame {state.target} again
           </button>
         </div>
       )}
       <PlayerScrubber times={times} frame={shown} marks={marks} filmstrip={filmstrip} onSeek={(f) => seekerRef.current?.seek(f)} title={title} />
-      <PlayerReadout status={state.status} frame={shown} frameCount={times.length} times={times} pts={frames.pts} timeBase={frames.timeBase} nominalRate={frames.variableRate ? null : frames.nominalRate} dispenseFrame={dispense} />
+      <PlayerReadout
+        status={state.status}
+        frame={shown}
+        frameCount={times.length}
+        times={times}
+        pts={frames.pts}
+        timeBase={frames.timeBase}
+        nominalRate={frames.variableRate ? null : frames.nominalRate}
+        dispenseFrame={dispense}
+      />
       <PlayerControls
         actions={actions}
         playing={state.status === "playing"}

@@ -36,10 +36,17 @@ export function KeyMapDialog({ open, onClose, extraKeys }: { open: boolean; onCl
     if (!open && d.open) d.close();
   }, [open]);
   return (
-    <dialog ref={ref} onClose={onClose} aria-labelledby="player-keys-title" className="m-auto max-h-[85vh] w-[min(64rem,94vw)] overflow-auto rounded-lg border border-ink-200 bg-white p-6 text-ink-900 shadow-xl backdrop:bg-ink-900/50">
+    <dialog
+      ref={ref}
+      onClose={onClose}
+      aria-labelledby="player-keys-title"
+      className="m-auto max-h-[85vh] w-[min(64rem,94vw)] overflow-auto rounded-lg border border-ink-200 bg-white p-6 text-ink-900 shadow-xl backdrop:bg-ink-900/50"
+    >
       <div className="mb-4 flex items-start justify-between gap-4">
         <div>
-          <h2 id="player-keys-title" className="text-xl font-semibold">Player keys</h2>
+          <h2 id="player-keys-title" className="text-xl font-semibold">
+            Player keys
+          </h2>
           <p className="text-sm text-ink-600">They work while the player has focus, and when nothing else on the page has it. Fields keep their own keys.</p>
         </div>
         <button type="button" onClick={onClose} className="rounded-md border border-ink-200 px-3 py-1.5 text-sm font-semibold hover:bg-ink-50">

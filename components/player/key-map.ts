@@ -2,10 +2,29 @@
 // dialog can never disagree with what the keys do.
 
 export type PlayerAction =
-  | "back1" | "forward1" | "back10" | "forward10" | "backSecond" | "forwardSecond" | "first" | "last"
-  | "goTo" | "playPause" | "slower" | "faster"
-  | "zoomIn" | "zoomOut" | "panLeft" | "panRight" | "panUp" | "panDown" | "resetPicture"
-  | "compare" | "flipCompare" | "pinReference" | "keyMap";
+  | "back1"
+  | "forward1"
+  | "back10"
+  | "forward10"
+  | "backSecond"
+  | "forwardSecond"
+  | "first"
+  | "last"
+  | "goTo"
+  | "playPause"
+  | "slower"
+  | "faster"
+  | "zoomIn"
+  | "zoomOut"
+  | "panLeft"
+  | "panRight"
+  | "panUp"
+  | "panDown"
+  | "resetPicture"
+  | "compare"
+  | "flipCompare"
+  | "pinReference"
+  | "keyMap";
 
 export interface KeyBinding {
   action: PlayerAction;
@@ -60,7 +79,13 @@ function parseSpec(spec: string): Spec {
   const plusKey = spec.endsWith("+") && (spec.length === 1 || spec.at(-2) === "+");
   const cut = plusKey ? spec.length - 1 : spec.lastIndexOf("+") + 1;
   const key = spec.slice(cut);
-  const mods = new Set(spec.slice(0, cut).split("+").filter(Boolean).map((p) => p.toLowerCase()));
+  const mods = new Set(
+    spec
+      .slice(0, cut)
+      .split("+")
+      .filter(Boolean)
+      .map((p) => p.toLowerCase()),
+  );
   return { key, shift: mods.has("shift"), alt: mods.has("alt"), ctrl: mods.has("ctrl") || mods.has("control") };
 }
 

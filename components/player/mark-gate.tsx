@@ -32,7 +32,12 @@ export function useMarkGate(control: RefObject<FramePlayerControl | null>) {
 /** Where a refused mark says why; a live region, so a mark key pressed at the wrong moment is heard too. */
 export function MarkStatus({ refused }: { refused: string | null }) {
   return (
-    <p role="status" aria-live="polite" data-testid="mark-status" className={refused ? "basis-full rounded-md border-l-4 border-wick-600 bg-wick-100 px-3 py-1.5 text-sm text-ink-900" : "sr-only"}>
+    <p
+      role="status"
+      aria-live="polite"
+      data-testid="mark-status"
+      className={refused ? "basis-full rounded-md border-l-4 border-wick-600 bg-wick-100 px-3 py-1.5 text-sm text-ink-900" : "sr-only"}
+    >
       {refused ?? ""}
     </p>
   );

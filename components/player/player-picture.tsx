@@ -22,7 +22,19 @@ interface Props {
   title: string;
 }
 
-function Pane({ ratio, caption, children, view, onView }: { ratio: number; caption?: string; children: ReactNode; view: PictureView; onView: Props["onView"] }) {
+function Pane({
+  ratio,
+  caption,
+  children,
+  view,
+  onView,
+}: {
+  ratio: number;
+  caption?: string;
+  children: ReactNode;
+  view: PictureView;
+  onView: Props["onView"];
+}) {
   const drag = useRef<{ x: number; y: number } | null>(null);
   return (
     <figure className="mx-auto space-y-1" style={{ width: `min(100%, calc(56vh * ${ratio}))` }}>
@@ -58,12 +70,30 @@ export function PlayerPicture(p: Props) {
   const ratio = p.size && p.size.height > 0 ? p.size.width / p.size.height : 16 / 9;
   const reference = p.compare !== "off" ? p.reference : null;
   const refVideo = reference && (
-    <CompareVideo src={p.media.src} frames={p.media.frames} offsetPts={p.media.offsetPts} frame={reference.frame} label={`Reference frame ${reference.frame} of ${p.title}`} />
+    <CompareVideo
+      src={p.media.src}
+      frames={p.media.frames}
+      offsetPts={p.media.offsetPts}
+      frame={reference.frame}
+      label={`Reference frame ${reference.frame} of ${p.title}`}
+    />
   );
   const onView = p.onView;
   const side = p.compare === "side" && reference !== null;
   const main = (
-    <Pane key="now" ratio={ratio} view={p.view} onView={onView} caption={reference ? (p.compare === "side" || !p.showReference ? `Now: frame ${p.current ?? "—"}` : `Reference: frame ${reference.frame} (${reference.why})`) : undefined}>
+    <Pane
+      key="now"
+      ratio={ratio}
+      view={p.view}
+      onView={onView}
+      caption={
+        reference
+          ? p.compare === "side" || !p.showReference
+            ? `Now: frame ${p.current ?? "—"}`
+            : `Reference: frame ${reference.frame} (${reference.why})`
+          : undefined
+      }
+    >
       {p.poster && <img src={p.poster} alt="" className="absolute inset-0 h-full w-full object-contain" />}
       <div ref={p.hostRef} className="absolute inset-0 [&_.video-js]:absolute [&_.video-js]:inset-0 [&_.video-js]:bg-transparent [&_video]:object-contain" />
       {p.compare === "swap" && reference && <div className={p.showReference ? "absolute inset-0" : "hidden"}>{refVideo}</div>}

@@ -102,7 +102,11 @@ export function PlayerScrubber({ times, frame, marks, filmstrip, onSeek, title }
           />
         ))}
         {frame !== null && (
-          <span aria-hidden="true" className="absolute inset-y-0 -ml-1.5 w-3 rounded-sm border-2 border-ink-900 bg-white shadow" style={{ left: `${at(frame)}%` }} />
+          <span
+            aria-hidden="true"
+            className="absolute inset-y-0 -ml-1.5 w-3 rounded-sm border-2 border-ink-900 bg-white shadow"
+            style={{ left: `${at(frame)}%` }}
+          />
         )}
       </div>
       <p className="sr-only">Marks: {marks.length ? marks.map((m) => `${m.label} at frame ${m.frame}`).join("; ") : "none"}.</p>

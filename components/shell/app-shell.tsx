@@ -30,7 +30,12 @@ export function AppShell({ user, devTools, children }: { user: ShellUser; devToo
           <div className="flex items-center gap-3 text-sm">
             {/* Name over roles, so a lead with several roles leaves the navigation room for one line. */}
             {/* The name opens the person's own account page (notices, details). */}
-            <Link href="/account" aria-label={`Your account: ${user.name}`} title="Your account" className="flex flex-col items-end rounded-md px-1 leading-tight hover:bg-ink-800">
+            <Link
+              href="/account"
+              aria-label={`Your account: ${user.name}`}
+              title="Your account"
+              className="flex flex-col items-end rounded-md px-1 leading-tight hover:bg-ink-800"
+            >
               <span className="font-semibold underline decoration-ink-600 underline-offset-2">{user.name}</span>
               <span className="text-xs text-ink-200">{user.roles.map((r) => ROLE_LABELS[r]).join(" · ")}</span>
             </Link>

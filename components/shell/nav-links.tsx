@@ -20,9 +20,13 @@ export function NavLinks({ items }: { items: NavItem[] }) {
   const { before, admin, after } = splitNav(items);
   return (
     <ul className="flex flex-wrap items-center">
-      {before.map((i) => <NavLink key={i.href} item={i} path={path} />)}
+      {before.map((i) => (
+        <NavLink key={i.href} item={i} path={path} />
+      ))}
       {admin.length > 0 && <NavMenu label="Administration" items={admin} path={path} />}
-      {after.map((i) => <NavLink key={i.href} item={i} path={path} />)}
+      {after.map((i) => (
+        <NavLink key={i.href} item={i} path={path} />
+      ))}
     </ul>
   );
 }

@@ -5,7 +5,8 @@ import { useEffect, useId, useRef, useState } from "react";
 import type { NavItem } from "./nav-items";
 
 export const isCurrent = (path: string, href: string) => path === href || path.startsWith(`${href}/`);
-export const linkClass = (current: boolean) => `block whitespace-nowrap rounded-md px-2 py-2 text-sm font-semibold ${current ? "bg-wick-500 text-ink-900" : "text-ink-100 hover:bg-ink-800"}`;
+export const linkClass = (current: boolean) =>
+  `block whitespace-nowrap rounded-md px-2 py-2 text-sm font-semibold ${current ? "bg-wick-500 text-ink-900" : "text-ink-100 hover:bg-ink-800"}`;
 
 /** A disclosure on the bar: a button that opens a short list of links; Escape or a click outside closes it. */
 export function NavMenu({ label, items, path }: { label: string; items: NavItem[]; path: string }) {
@@ -54,7 +55,12 @@ export function NavMenu({ label, items, path }: { label: string; items: NavItem[
       <ul id={id} hidden={!open} className="absolute left-0 z-20 mt-1 min-w-44 rounded-md border border-ink-600 bg-ink-900 p-1 shadow-lg">
         {items.map((i) => (
           <li key={i.href}>
-            <Link href={i.href} onClick={() => setOpen(false)} aria-current={isCurrent(path, i.href) ? "page" : undefined} className={linkClass(isCurrent(path, i.href))}>
+            <Link
+              href={i.href}
+              onClick={() => setOpen(false)}
+              aria-current={isCurrent(path, i.href) ? "page" : undefined}
+              className={linkClass(isCurrent(path, i.href))}
+            >
               {i.label}
             </Link>
           </li>

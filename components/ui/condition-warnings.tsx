@@ -8,7 +8,9 @@ export function ConditionWarnings({ run, showWhen = false }: { run: Conditions; 
   if (run.flags.length === 0) return <p className="text-sm text-ok-700">Conditions within the edition&apos;s limits.</p>;
   const accepted = !run.needsAcceptance && run.acceptedByName;
   return (
-    <div className={`rounded-md border-l-4 px-3 py-2 text-sm ${accepted ? "border-ink-400 bg-ink-50 text-ink-800" : "border-wick-600 bg-wick-100 text-ink-900"}`}>
+    <div
+      className={`rounded-md border-l-4 px-3 py-2 text-sm ${accepted ? "border-ink-400 bg-ink-50 text-ink-800" : "border-wick-600 bg-wick-100 text-ink-900"}`}
+    >
       <p className="font-semibold">{accepted ? "Conditions warning, accepted" : "Conditions warning"}</p>
       <ul className="mt-1 list-disc space-y-0.5 pl-5">
         {run.flags.map((f) => (

@@ -56,7 +56,12 @@ export function DataTable<T>({
                 const active = sort.id === h.column.id;
                 const label = flexRender(h.column.columnDef.header, h.getContext());
                 return (
-                  <th key={h.id} scope="col" className="px-3 py-2 font-semibold" aria-sort={h.column.getCanSort() ? (active ? (sort.desc ? "descending" : "ascending") : "none") : undefined}>
+                  <th
+                    key={h.id}
+                    scope="col"
+                    className="px-3 py-2 font-semibold"
+                    aria-sort={h.column.getCanSort() ? (active ? (sort.desc ? "descending" : "ascending") : "none") : undefined}
+                  >
                     {h.column.getCanSort() ? (
                       <button
                         type="button"
@@ -64,7 +69,9 @@ export function DataTable<T>({
                         className="inline-flex items-center gap-1 rounded hover:text-ink-900"
                       >
                         {label}
-                        <span aria-hidden="true" className="text-xs">{active ? (sort.desc ? "▼" : "▲") : "↕"}</span>
+                        <span aria-hidden="true" className="text-xs">
+                          {active ? (sort.desc ? "▼" : "▲") : "↕"}
+                        </span>
                       </button>
                     ) : (
                       label

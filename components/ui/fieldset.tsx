@@ -2,7 +2,21 @@ import type { ComponentProps, ReactNode } from "react";
 import { describedBy, FieldMessages } from "./field-messages";
 
 /** A group of radios or checkboxes under one legend, with its error read out for the group. */
-export function Fieldset({ id, legend, error, hint, children, className = "" }: { id: string; legend: string; error?: string; hint?: string; children: ReactNode; className?: string }) {
+export function Fieldset({
+  id,
+  legend,
+  error,
+  hint,
+  children,
+  className = "",
+}: {
+  id: string;
+  legend: string;
+  error?: string;
+  hint?: string;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <fieldset id={id} aria-describedby={describedBy(id, error, hint)} aria-invalid={error ? true : undefined} className={`space-y-1 ${className}`}>
       <legend className="text-sm font-semibold text-ink-800">{legend}</legend>

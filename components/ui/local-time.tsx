@@ -10,6 +10,10 @@ const noSubscription = () => () => {};
  * nothing and the browser fills the time in after hydration.
  */
 export function LocalTime({ iso }: { iso: string }) {
-  const text = useSyncExternalStore(noSubscription, () => formatInstant(iso), () => null);
+  const text = useSyncExternalStore(
+    noSubscription,
+    () => formatInstant(iso),
+    () => null,
+  );
   return <time dateTime={iso}>{text ?? "…"}</time>;
 }

@@ -5,7 +5,21 @@ import { Button } from "./button";
 export const PAGE_SIZES = [10, 20, 50, 100] as const;
 
 /** "Showing 21–40 of 57", the page size, and previous/next. */
-export function Pager({ page, pageSize, total, onPage, onPageSize, label }: { page: number; pageSize: number; total: number; onPage: (p: number) => void; onPageSize: (n: number) => void; label: string }) {
+export function Pager({
+  page,
+  pageSize,
+  total,
+  onPage,
+  onPageSize,
+  label,
+}: {
+  page: number;
+  pageSize: number;
+  total: number;
+  onPage: (p: number) => void;
+  onPageSize: (n: number) => void;
+  label: string;
+}) {
   const first = (page - 1) * pageSize + 1;
   const last = Math.min(page * pageSize, total);
   const shown = first <= last ? `Showing ${first}–${last} of ${total}` : `Showing none of ${total}`;

@@ -6,7 +6,14 @@ export const CONTROL_BASE = "block rounded-md border border-ink-200 bg-white px-
 export const CONTROL_CLASS = `${CONTROL_BASE} w-full`;
 
 /** A labelled select; the error and hint are read out with it. */
-export function SelectField({ label, error, hint, id, children, ...select }: { label: string; error?: string; hint?: string; id: string } & ComponentProps<"select">) {
+export function SelectField({
+  label,
+  error,
+  hint,
+  id,
+  children,
+  ...select
+}: { label: string; error?: string; hint?: string; id: string } & ComponentProps<"select">) {
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block text-sm font-semibold text-ink-800">

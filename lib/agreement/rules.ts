@@ -90,7 +90,11 @@ export interface AgreementReport extends AgreementSummary {
 const difference = (p: ReadingPair) => p.first.timeS - p.second.timeS;
 
 function statistics(pairs: readonly ReadingPair[]): AgreementStatistics {
-  const ba = blandAltman(pairs.map((p) => p.first.timeS), pairs.map((p) => p.second.timeS), LIMITS_MULTIPLIER);
+  const ba = blandAltman(
+    pairs.map((p) => p.first.timeS),
+    pairs.map((p) => p.second.timeS),
+    LIMITS_MULTIPLIER,
+  );
   let icc11: number | null = null;
   let iccReason: string | null = null;
   try {

@@ -52,8 +52,17 @@ export async function listAuditEvents(q: Db, f: AuditFilter): Promise<{ rows: Au
   return {
     total: Number(count),
     rows: rows.map((r: Record<string, any>) => ({
-      id: String(r.id), at: r.at, actorId: r.actor_id, actorName: r.actor_name, action: r.action, entity: r.entity,
-      entityId: r.entity_id, before: r.before, after: r.after, requestId: r.request_id, dropState: r.drop_state,
+      id: String(r.id),
+      at: r.at,
+      actorId: r.actor_id,
+      actorName: r.actor_name,
+      action: r.action,
+      entity: r.entity,
+      entityId: r.entity_id,
+      before: r.before,
+      after: r.after,
+      requestId: r.request_id,
+      dropState: r.drop_state,
     })),
   };
 }

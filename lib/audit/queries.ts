@@ -28,7 +28,9 @@ export async function insertAuditEvent(q: Db, e: AuditEventInput): Promise<void>
 }
 
 export async function findAuditEvents(q: Db, filter: { entity?: string; entityId?: string; action?: string; limit?: number }): Promise<AuditEventRow[]> {
-  const query = q("audit_events").orderBy("id", "desc").limit(filter.limit ?? 100);
+  const query = q("audit_events")
+    .orderBy("id", "desc")
+    .limit(filter.limit ?? 100);
   if (filter.entity) query.where("entity", filter.entity);
   if (filter.entityId) query.where("entity_id", filter.entityId);
   if (filter.action) query.where("action", filter.action);

@@ -1,6 +1,10 @@
 import { z } from "zod";
 
-const date = (label: string) => z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date like 2026-12-01.`).optional();
+const date = (label: string) =>
+  z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date like 2026-12-01.`)
+    .optional();
 
 export const auditQuerySchema = z.object({
   actorId: z.uuid("Choose the person from the list.").optional(),

@@ -18,7 +18,10 @@ export interface ThrottleDecision {
  */
 export function throttleDecision(failures: readonly Date[], max: number, now: Date, windowSeconds = THROTTLE.windowSeconds): ThrottleDecision {
   const windowStart = now.getTime() - windowSeconds * 1000;
-  const recent = failures.map((d) => d.getTime()).filter((t) => t > windowStart).sort((a, b) => b - a);
+  const recent = failures
+    .map((d) => d.getTime())
+    .filter((t) => t > windowStart)
+    .sort((a, b) => b - a);
   if (recent.length < max) return { allowed: true, retryAfterSeconds: 0 };
   const releaseAt = recent[max - 1] + windowSeconds * 1000;
   return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil((releaseAt - now.getTime()) / 1000)) };

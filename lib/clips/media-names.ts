@@ -1,8 +1,16 @@
 // Containers and codecs as people in a lab call them, from ffprobe's names. Pure.
 
 export const CODECS: Record<string, string> = {
-  h264: "H.264", hevc: "H.265 (HEVC)", vp8: "VP8", vp9: "VP9", av1: "AV1", mpeg4: "MPEG-4 Part 2", mpeg2video: "MPEG-2", mpeg1video: "MPEG-1",
-  mjpeg: "Motion JPEG", prores: "ProRes",
+  h264: "H.264",
+  hevc: "H.265 (HEVC)",
+  vp8: "VP8",
+  vp9: "VP9",
+  av1: "AV1",
+  mpeg4: "MPEG-4 Part 2",
+  mpeg2video: "MPEG-2",
+  mpeg1video: "MPEG-1",
+  mjpeg: "Motion JPEG",
+  prores: "ProRes",
 };
 
 export const codecName = (codec: string): string => CODECS[codec] ?? codec;

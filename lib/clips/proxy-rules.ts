@@ -52,11 +52,15 @@ export function proxyBuildFailure(toolMessage: string): string {
 }
 
 /** Whether the original can be stepped frame by frame in a browser as it is (else a proxy is made). */
-export function stepsWellInBrowser(p: { formatName: string; codec: string; hasBFrames: boolean; firstPts: number; maxKeyframeIntervalS: number }): { ok: boolean; reason: string } {
+export function stepsWellInBrowser(p: { formatName: string; codec: string; hasBFrames: boolean; firstPts: number; maxKeyframeIntervalS: number }): {
+  ok: boolean;
+  reason: string;
+} {
   if (!/\b(mp4|mov)\b/.test(p.formatName)) return { ok: false, reason: `browsers do not seek reliably in ${containerName(p.formatName)} files` };
   if (p.codec !== "h264") return { ok: false, reason: `${codecName(p.codec)} video does not play in every browser` };
   if (p.hasBFrames) return { ok: false, reason: "B-frames make some frames unreachable when stepping" };
   if (p.firstPts !== 0) return { ok: false, reason: "the first frame does not start at time 0" };
-  if (p.maxKeyframeIntervalS > 0.55) return { ok: false, reason: `keyframes are up to ${p.maxKeyframeIntervalS.toFixed(2)} s apart, too far for quick stepping` };
+  if (p.maxKeyframeIntervalS > 0.55)
+    return { ok: false, reason: `keyframes are up to ${p.maxKeyframeIntervalS.toFixed(2)} s apart, too far for quick stepping` };
   return { ok: true, reason: "the original steps well in a browser: H.264 in MP4, no B-frames, keyframes at least every 0.5 s" };
 }

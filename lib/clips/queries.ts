@@ -57,9 +57,27 @@ function toClip(r: Record<string, any>): ClipRow {
   };
 }
 
-export async function insertClip(q: Db, c: { id: string; runId: string; originalName: string; declaredType: string; declaredSize: number; objectKey: string; uploadedBy: string; trim?: TrimSource | null }): Promise<void> {
+export async function insertClip(
+  q: Db,
+  c: {
+    id: string;
+    runId: string;
+    originalName: string;
+    declaredType: string;
+    declaredSize: number;
+    objectKey: string;
+    uploadedBy: string;
+    trim?: TrimSource | null;
+  },
+): Promise<void> {
   await q("clips").insert({
-    id: c.id, run_id: c.runId, original_name: c.originalName, declared_type: c.declaredType, declared_size: c.declaredSize, object_key: c.objectKey, uploaded_by: c.uploadedBy,
+    id: c.id,
+    run_id: c.runId,
+    original_name: c.originalName,
+    declared_type: c.declaredType,
+    declared_size: c.declaredSize,
+    object_key: c.objectKey,
+    uploaded_by: c.uploadedBy,
     trim: c.trim ? JSON.stringify(c.trim) : null,
   });
 }
@@ -78,9 +96,27 @@ export async function listClipsOfRun(q: Db, runId: string): Promise<ClipRow[]> {
 export async function updateClip(
   q: Db,
   id: string,
-  patch: Partial<{ status: ClipStatus; rejectReason: string | null; storedSize: number; sha256: string; duplicateOf: string | null; probe: ProbeSummary; uploadedAt: Date; readyAt: Date }>,
+  patch: Partial<{
+    status: ClipStatus;
+    rejectReason: string | null;
+    storedSize: number;
+    sha256: string;
+    duplicateOf: string | null;
+    probe: ProbeSummary;
+    uploadedAt: Date;
+    readyAt: Date;
+  }>,
 ): Promise<void> {
-  const map: Record<string, string> = { status: "status", rejectReason: "reject_reason", storedSize: "stored_size", sha256: "sha256", duplicateOf: "duplicate_of", probe: "probe", uploadedAt: "uploaded_at", readyAt: "ready_at" };
+  const map: Record<string, string> = {
+    status: "status",
+    rejectReason: "reject_reason",
+    storedSize: "stored_size",
+    sha256: "sha256",
+    duplicateOf: "duplicate_of",
+    probe: "probe",
+    uploadedAt: "uploaded_at",
+    readyAt: "ready_at",
+  };
   const row: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(patch)) row[map[k]] = k === "probe" ? JSON.stringify(v) : v;
   if (Object.keys(row).length) await q("clips").where({ id }).update(row);
@@ -96,7 +132,10 @@ export async function insertUpload(q: Db, u: { clipId: string; uploadId: string;
   await q("clip_uploads").insert({ clip_id: u.clipId, upload_id: u.uploadId, part_size: u.partSize, part_count: u.partCount });
 }
 
-export async function findUpload(q: Db, clipId: string): Promise<{ uploadId: string; partSize: number; partCount: number; completedAt: Date | null } | undefined> {
+export async function findUpload(
+  q: Db,
+  clipId: string,
+): Promise<{ uploadId: string; partSize: number; partCount: number; completedAt: Date | null } | undefined> {
   const r = await q("clip_uploads").where({ clip_id: clipId }).first();
   return r ? { uploadId: r.upload_id, partSize: r.part_size, partCount: r.part_count, completedAt: r.completed_at } : undefined;
 }
@@ -119,16 +158,29 @@ export async function listParts(q: Db, clipId: string): Promise<{ partNumber: nu
 }
 
 export async function insertSteps(q: Db, clipId: string, steps: readonly Step[]): Promise<void> {
-  await q("clip_steps").insert(steps.map((step) => ({ clip_id: clipId, step }))).onConflict(["clip_id", "step"]).ignore();
+  await q("clip_steps")
+    .insert(steps.map((step) => ({ clip_id: clipId, step })))
+    .onConflict(["clip_id", "step"])
+    .ignore();
 }
 
 export async function listSteps(q: Db, clipId: string): Promise<StepRow[]> {
   const rows = await q("clip_steps").where({ clip_id: clipId });
-  return rows.map((r) => ({ step: r.step, state: r.state, attempts: r.attempts, reason: r.reason, detail: r.detail, startedAt: r.started_at, finishedAt: r.finished_at }));
+  return rows.map((r) => ({
+    step: r.step,
+    state: r.state,
+    attempts: r.attempts,
+    reason: r.reason,
+    detail: r.detail,
+    startedAt: r.started_at,
+    finishedAt: r.finished_at,
+  }));
 }
 
 export async function startStep(q: Db, clipId: string, step: Step): Promise<void> {
-  await q("clip_steps").where({ clip_id: clipId, step }).update({ state: "running", attempts: q.raw("attempts + 1"), started_at: q.fn.now(), finished_at: null });
+  await q("clip_steps")
+    .where({ clip_id: clipId, step })
+    .update({ state: "running", attempts: q.raw("attempts + 1"), started_at: q.fn.now(), finished_at: null });
 }
 
 export async function finishStep(q: Db, clipId: string, step: Step, state: StepState, reason: string | null, detail?: Record<string, unknown>): Promise<void> {

@@ -14,7 +14,14 @@ export interface RenditionRow {
 export async function findRendition(q: Db, clipId: string): Promise<RenditionRow | undefined> {
   const r = await q("clip_renditions").where({ clip_id: clipId }).first();
   return r
-    ? { proxyKey: r.proxy_key, proxyReason: r.proxy_reason, proxyOffsetPts: r.proxy_offset_pts === null ? null : Number(r.proxy_offset_pts), posterKey: r.poster_key, filmstripKey: r.filmstrip_key, filmstripTiles: r.filmstrip_tiles }
+    ? {
+        proxyKey: r.proxy_key,
+        proxyReason: r.proxy_reason,
+        proxyOffsetPts: r.proxy_offset_pts === null ? null : Number(r.proxy_offset_pts),
+        posterKey: r.poster_key,
+        filmstripKey: r.filmstrip_key,
+        filmstripTiles: r.filmstrip_tiles,
+      }
     : undefined;
 }
 

@@ -20,5 +20,7 @@ export interface StepOutcome {
 
 /** ffprobe/ffmpeg errors that come from the network or the store, not from the file. */
 export function isTransientToolError(stderr: string): boolean {
-  return /Connection refused|Connection reset|timed out|Server returned 5\d\d|Input\/output error|Temporary failure|Network is unreachable|Broken pipe/i.test(stderr);
+  return /Connection refused|Connection reset|timed out|Server returned 5\d\d|Input\/output error|Temporary failure|Network is unreachable|Broken pipe/i.test(
+    stderr,
+  );
 }

@@ -16,7 +16,12 @@ export async function verifyStep(clip: ClipRow): Promise<StepOutcome> {
     if (isTransientToolError(result.stderr)) throw new Error(`ffprobe could not reach the file: ${result.stderr.trim().slice(-300)}`);
     throw new PermanentStepError(reasonFromProbeError(result.stderr, clip.storedSize ?? 0), true);
   }
-  const verdict = verdictFromProbe(result.json, env().CLIP_CONTAINERS.split(",").map((s) => s.trim()));
+  const verdict = verdictFromProbe(
+    result.json,
+    env()
+      .CLIP_CONTAINERS.split(",")
+      .map((s) => s.trim()),
+  );
   if (!verdict.ok) throw new PermanentStepError(verdict.reason, true);
   await updateClip(db(), clip.id, { probe: verdict.probe });
   const v = verdict.probe.video;
@@ -27,5 +32,9 @@ export async function hashStep(clip: ClipRow): Promise<StepOutcome> {
   const sha256 = await sha256OfStream(await getObjectStream(clip.objectKey));
   const duplicateOf = (await findFirstWithHash(db(), sha256, clip.id)) ?? null;
   await updateClip(db(), clip.id, { sha256, duplicateOf });
-  return { state: "done", reason: duplicateOf ? "The same bytes were uploaded before: this clip is flagged as a duplicate." : undefined, detail: { sha256, duplicateOf } };
+  return {
+    state: "done",
+    reason: duplicateOf ? "The same bytes were uploaded before: this clip is flagged as a duplicate." : undefined,
+    detail: { sha256, duplicateOf },
+  };
 }

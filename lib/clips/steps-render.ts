@@ -29,7 +29,13 @@ async function inTempDir<T>(clipId: string, work: (dir: string) => Promise<T>): 
 export async function proxyStep(clip: ClipRow): Promise<StepOutcome> {
   const index = await findFrameIndex(db(), clip.id);
   if (!index || !clip.probe) throw new Error("the frame index is not built yet");
-  const decision = stepsWellInBrowser({ formatName: clip.probe.formatName, codec: index.codec, hasBFrames: index.hasBFrames, firstPts: index.firstPts, maxKeyframeIntervalS: index.maxKeyframeIntervalS });
+  const decision = stepsWellInBrowser({
+    formatName: clip.probe.formatName,
+    codec: index.codec,
+    hasBFrames: index.hasBFrames,
+    firstPts: index.firstPts,
+    maxKeyframeIntervalS: index.maxKeyframeIntervalS,
+  });
   if (decision.ok) {
     await saveProxy(db(), clip.id, { proxyKey: null, proxyReason: decision.reason, proxyOffsetPts: null });
     return { state: "skipped", reason: `Not needed: ${decision.reason}.` };

@@ -24,9 +24,6 @@ export function trimKept(trim: TrimSource, index: { firstPts: number; lastPts: n
 export function trimNote(t: TrimSource, first: number | null, last: number | null): string {
   const asked = `Trimmed in the browser from ${t.sourceName}: asked for ${s(t.requestedStartS)} to ${s(t.requestedEndS)}`;
   if (first === null || last === null) return `${asked}; what was kept is known once the frame index is built.`;
-  const why =
-    first < t.requestedStartS - 1e-6
-      ? ` It starts before the start asked for because a copy without re-encoding must begin at a keyframe.`
-      : "";
+  const why = first < t.requestedStartS - 1e-6 ? ` It starts before the start asked for because a copy without re-encoding must begin at a keyframe.` : "";
   return `${asked}; kept the frames shown from ${s(first)} to ${s(last)} of the original.${why}`;
 }

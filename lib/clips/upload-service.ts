@@ -26,25 +26,48 @@ type In<T extends z.ZodType> = z.output<T>;
 export async function startUpload(actor: Actor, runId: string, v: In<typeof startUploadSchema>) {
   const { submissionId, voidedAt } = await visibleRunForClips(actor, db(), runId);
   assertCanEditIntake(actor);
-  if (voidedAt) throw new AppError("conflict", "This run is voided: it no longer counts and takes no new recordings. Record a new run for the ball and upload there.");
+  if (voidedAt)
+    throw new AppError("conflict", "This run is voided: it no longer counts and takes no new recordings. Record a new run for the ball and upload there.");
   // A signed-off submission takes no new evidence until a lead re-opens it; refused before any storage is touched.
   await assertUnlocked(db(), submissionId);
   const max = env().CLIP_MAX_BYTES;
   const refusal =
-    v.size === 0 ? "The file is empty (0 bytes). Export the recording again and upload the new file."
-    : v.size > max ? `The file is ${formatBytes(v.size)}; the largest recording accepted is ${formatBytes(max)}. Trim it before uploading.`
-    : null;
+    v.size === 0
+      ? "The file is empty (0 bytes). Export the recording again and upload the new file."
+      : v.size > max
+        ? `The file is ${formatBytes(v.size)}; the largest recording accepted is ${formatBytes(max)}. Trim it before uploading.`
+        : null;
   const id = randomUUID();
   const key = clipObjectKey(id, "original");
   const plan = refusal ? { partSize: 0, partCount: 0 } : planParts(v.size, env().CLIP_PART_SIZE_MB * 1024 * 1024);
   const uploadId = refusal ? null : await createMultipartUpload(key, v.contentType);
   await db().transaction(async (trx) => {
-    await insertClip(trx, { id, runId, originalName: v.fileName, declaredType: v.contentType, declaredSize: v.size, objectKey: key, uploadedBy: actor.id, trim: v.trim ?? null });
+    await insertClip(trx, {
+      id,
+      runId,
+      originalName: v.fileName,
+      declaredType: v.contentType,
+      declaredSize: v.size,
+      objectKey: key,
+      uploadedBy: actor.id,
+      trim: v.trim ?? null,
+    });
     if (refusal) await updateClip(trx, id, { status: "rejected", rejectReason: refusal });
     if (uploadId) await insertUpload(trx, { clipId: id, uploadId, ...plan });
-    await recordChange(trx, actor, { action: refusal ? "clip.refused" : "clip.upload_started", entity: "clip", entityId: id, after: { runId, fileName: v.fileName, size: v.size, ...plan, reason: refusal, ...(v.trim ? { trim: v.trim } : {}) } });
+    await recordChange(trx, actor, {
+      action: refusal ? "clip.refused" : "clip.upload_started",
+      entity: "clip",
+      entityId: id,
+      after: { runId, fileName: v.fileName, size: v.size, ...plan, reason: refusal, ...(v.trim ? { trim: v.trim } : {}) },
+    });
   });
-  return { clipId: id, status: refusal ? ("rejected" as const) : ("uploading" as const), rejectReason: refusal, ...plan, parts: [] as { partNumber: number; size: number }[] };
+  return {
+    clipId: id,
+    status: refusal ? ("rejected" as const) : ("uploading" as const),
+    rejectReason: refusal,
+    ...plan,
+    parts: [] as { partNumber: number; size: number }[],
+  };
 }
 
 async function openUpload(actor: Actor, clipId: string) {
@@ -74,7 +97,8 @@ export async function signParts(actor: Actor, clipId: string, partNumbers: numbe
 export async function recordPart(actor: Actor, clipId: string, partNumber: number, v: In<typeof recordPartSchema>) {
   const { clip, upload } = await openUpload(actor, clipId);
   if (clip.status !== "uploading") return { recorded: partNumber, alreadyComplete: true };
-  if (partNumber < 1 || partNumber > upload.partCount) throw new AppError("validation", `Part ${partNumber} does not exist: this upload has ${upload.partCount} parts.`);
+  if (partNumber < 1 || partNumber > upload.partCount)
+    throw new AppError("validation", `Part ${partNumber} does not exist: this upload has ${upload.partCount} parts.`);
   await upsertPart(db(), { clipId, partNumber, etag: v.etag, size: v.size });
   return { recorded: partNumber, alreadyComplete: false };
 }
@@ -85,12 +109,17 @@ export async function completeUpload(actor: Actor, clipId: string) {
   if (clip.status !== "uploading") return { clipId, status: clip.status };
   const parts = await listParts(db(), clipId);
   const missing = Array.from({ length: upload.partCount }, (_, i) => i + 1).filter((n) => !parts.some((p) => p.partNumber === n));
-  if (missing.length) throw new AppError("conflict", `The upload is not finished: part${missing.length > 1 ? "s" : ""} ${missing.slice(0, 10).join(", ")}${missing.length > 10 ? "…" : ""} still to send.`);
+  if (missing.length)
+    throw new AppError(
+      "conflict",
+      `The upload is not finished: part${missing.length > 1 ? "s" : ""} ${missing.slice(0, 10).join(", ")}${missing.length > 10 ? "…" : ""} still to send.`,
+    );
   try {
     await completeMultipartUpload(clip.objectKey, upload.uploadId, parts);
   } catch (err) {
     // A completion that went through but whose answer was lost: the object is there.
-    if (!(await objectExists(clip.objectKey))) throw new AppError("unavailable", "The object store did not accept the upload. Try completing it again.", { cause: err });
+    if (!(await objectExists(clip.objectKey)))
+      throw new AppError("unavailable", "The object store did not accept the upload. Try completing it again.", { cause: err });
   }
   const stored = (await headObject(clip.objectKey)).size;
   const tooLarge = stored > env().CLIP_MAX_BYTES;
@@ -98,11 +127,25 @@ export async function completeUpload(actor: Actor, clipId: string) {
     const locked = await visibleClip(actor, trx, clipId, { lock: true });
     if (locked.status !== "uploading") return;
     await markUploadCompleted(trx, clipId);
-    await updateClip(trx, clipId, tooLarge
-      ? { status: "rejected", storedSize: stored, uploadedAt: new Date(), rejectReason: `The stored file is ${formatBytes(stored)}; the largest recording accepted is ${formatBytes(env().CLIP_MAX_BYTES)}.` }
-      : { status: "processing", storedSize: stored, uploadedAt: new Date() });
+    await updateClip(
+      trx,
+      clipId,
+      tooLarge
+        ? {
+            status: "rejected",
+            storedSize: stored,
+            uploadedAt: new Date(),
+            rejectReason: `The stored file is ${formatBytes(stored)}; the largest recording accepted is ${formatBytes(env().CLIP_MAX_BYTES)}.`,
+          }
+        : { status: "processing", storedSize: stored, uploadedAt: new Date() },
+    );
     if (!tooLarge) await insertSteps(trx, clipId, STEPS);
-    await recordChange(trx, actor, { action: "clip.uploaded", entity: "clip", entityId: clipId, after: { storedSize: stored, parts: parts.length, rejected: tooLarge } });
+    await recordChange(trx, actor, {
+      action: "clip.uploaded",
+      entity: "clip",
+      entityId: clipId,
+      after: { storedSize: stored, parts: parts.length, rejected: tooLarge },
+    });
   });
   if (!tooLarge) await enqueue("clipVerify", { clipId });
   return { clipId, status: tooLarge ? "rejected" : "processing" };

@@ -34,8 +34,10 @@ export function rational(s: string | undefined): Rational | null {
 /** From a failed ffprobe: the usual reasons, then a plain fallback. */
 export function reasonFromProbeError(stderr: string, size: number): string {
   if (size === 0) return "The file is empty (0 bytes). Export the recording again and upload the new file.";
-  if (/moov atom not found/i.test(stderr)) return "The MP4 file is incomplete: its index (the 'moov' box) is missing, so the recording was probably cut off while it was being written or copied. Export it again.";
-  if (/Invalid data found|could not find codec parameters|unknown format/i.test(stderr)) return "This file is not a video recording Wickmark can read: its contents are not a known video format, whatever its name says.";
+  if (/moov atom not found/i.test(stderr))
+    return "The MP4 file is incomplete: its index (the 'moov' box) is missing, so the recording was probably cut off while it was being written or copied. Export it again.";
+  if (/Invalid data found|could not find codec parameters|unknown format/i.test(stderr))
+    return "This file is not a video recording Wickmark can read: its contents are not a known video format, whatever its name says.";
   if (/truncat|end of file|partial file/i.test(stderr)) return "The file ends early: it looks truncated. Upload the complete recording.";
   return `The file could not be read as a video (${stderr.trim().split("\n").pop()?.slice(0, 200) || "no detail"}).`;
 }
@@ -47,7 +49,8 @@ export function verdictFromProbe(json: Json, acceptedContainers: readonly string
   if (STILL_IMAGES.test(format)) return { ok: false, reason: `This is a still image (${format.replace(/_pipe$/, "").toUpperCase()}), not a video recording.` };
   const video = streams.find((s) => s.codec_type === "video" && !(s.disposition?.attached_pic === 1));
   const audio = streams.filter((s) => s.codec_type === "audio").length;
-  if (!video) return { ok: false, reason: audio > 0 ? "The file has sound but no picture: it contains no video stream." : "The file contains no video stream." };
+  if (!video)
+    return { ok: false, reason: audio > 0 ? "The file has sound but no picture: it contains no video stream." : "The file contains no video stream." };
   const raw = rawStreamName(format);
   if (raw) return { ok: false, reason: rawStreamRefusal(raw) };
   if (!names.some((n) => acceptedContainers.includes(n))) {

@@ -55,11 +55,24 @@ export function toClipView(
       ? STEPS.map((s) => {
           const state = byStep.get(s)?.state ?? "pending";
           const stopped = (c.status === "rejected" || c.status === "failed") && state === "pending";
-          return { step: s, label: STEP_LABELS[s], state: stopped ? "not_needed" : state, attempts: byStep.get(s)?.attempts ?? 0, reason: byStep.get(s)?.reason ?? null };
+          return {
+            step: s,
+            label: STEP_LABELS[s],
+            state: stopped ? "not_needed" : state,
+            attempts: byStep.get(s)?.attempts ?? 0,
+            reason: byStep.get(s)?.reason ?? null,
+          };
         })
       : [],
     index: index ? summary : null,
-    playback: ready && index ? (urls.proxy ? { url: urls.proxy, isProxy: true, offsetPts: rendition?.proxyOffsetPts ?? index.firstPts } : urls.original ? { url: urls.original, isProxy: false, offsetPts: 0 } : null) : null,
+    playback:
+      ready && index
+        ? urls.proxy
+          ? { url: urls.proxy, isProxy: true, offsetPts: rendition?.proxyOffsetPts ?? index.firstPts }
+          : urls.original
+            ? { url: urls.original, isProxy: false, offsetPts: 0 }
+            : null
+        : null,
     posterUrl: urls.poster,
     filmstrip: urls.filmstrip && rendition?.filmstripTiles ? { url: urls.filmstrip, tiles: rendition.filmstripTiles } : null,
     proxyReason: rendition?.proxyReason || null,

@@ -70,10 +70,18 @@ const base = (q: Db) =>
     .leftJoin("frame_indexes as fi", "fi.clip_id", "d.clip_id")
     .select(
       "d.*",
-      "c.original_name as clip_name", "c.status as clip_status", "c.reject_reason as clip_reject_reason",
-      "s.id as sample_id", "s.serial as sample_serial",
-      "sub.id as submission_id", "sub.reference as submission_reference", "sub.organisation_id",
-      "e.reading_tolerance_s", "p.name as placed_by_name", "fi.time_base_num", "fi.time_base_den",
+      "c.original_name as clip_name",
+      "c.status as clip_status",
+      "c.reject_reason as clip_reject_reason",
+      "s.id as sample_id",
+      "s.serial as sample_serial",
+      "sub.id as submission_id",
+      "sub.reference as submission_reference",
+      "sub.organisation_id",
+      "e.reading_tolerance_s",
+      "p.name as placed_by_name",
+      "fi.time_base_num",
+      "fi.time_base_den",
     );
 
 // Every change to a drop's readings locks the drop row first (only that row: `for update of d`).
@@ -86,10 +94,7 @@ export async function findDrop(q: Db, id: string, opts: { lock?: boolean } = {})
 
 /** The drop a reading belongs to, locked, in one round trip. */
 export async function findDropOfReadingForUpdate(q: Db, readingId: string): Promise<DropRow | undefined> {
-  const r = await base(q)
-    .whereRaw("d.id = (select drop_id from readings where id = ?)", [readingId])
-    .first()
-    .forUpdate("d");
+  const r = await base(q).whereRaw("d.id = (select drop_id from readings where id = ?)", [readingId]).first().forUpdate("d");
   return r ? toDrop(r) : undefined;
 }
 
@@ -131,11 +136,16 @@ export async function listQueueFor(q: Db, reviewerId: string, limit = 200): Prom
         .whereExists((e) => e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where({ "m.reviewer_id": reviewerId, "m.status": "draft" }))
         .orWhere((o) =>
           o
-            .whereNotExists((e) => e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where("m.reviewer_id", reviewerId).whereNull("m.supersedes_id"))
+            .whereNotExists((e) =>
+              e.select(q.raw("1")).from("readings as m").whereRaw("m.drop_id = d.id").where("m.reviewer_id", reviewerId).whereNull("m.supersedes_id"),
+            )
             .whereRaw("(select count(*) from readings h where h.drop_id = d.id and h.supersedes_id is null) < 2"),
         ),
     )
-    .orderBy([{ column: "d.placed_at", order: "asc" }, { column: "d.ordinal", order: "asc" }])
+    .orderBy([
+      { column: "d.placed_at", order: "asc" },
+      { column: "d.ordinal", order: "asc" },
+    ])
     .limit(limit);
   return rows.map(toDrop);
 }

@@ -24,8 +24,17 @@ export async function getDrop(actor: Actor, id: string): Promise<DropView> {
 }
 
 async function viewsOf(actor: Actor, drops: DropRow[]): Promise<DropView[]> {
-  const readings = await listReadingsOfDrops(db(), drops.map((d) => d.id));
-  return drops.map((d) => toDropView(actor, d, readings.filter((r) => r.dropId === d.id)));
+  const readings = await listReadingsOfDrops(
+    db(),
+    drops.map((d) => d.id),
+  );
+  return drops.map((d) =>
+    toDropView(
+      actor,
+      d,
+      readings.filter((r) => r.dropId === d.id),
+    ),
+  );
 }
 
 export async function listRunDrops(actor: Actor, runId: string): Promise<DropView[]> {
@@ -43,8 +52,12 @@ export async function placeDrop(actor: Actor, id: string, p: PlacementInput): Pr
     const drop = await findDrop(trx, id, { lock: true });
     if (!drop) throw new AppError("not_found", "No such drop.");
     const clip = await findClip(trx, p.clipId);
-    if (!clip || clip.runId !== drop.runId) throw new AppError("validation", "Choose one of this run's clips.", { fields: { clipId: "Choose one of this run's clips." } });
-    if (clip.status !== "ready") throw new AppError("validation", `The clip ${clip.originalName} is not ready for reading (${clip.status}).`, { fields: { clipId: "This clip is not ready." } });
+    if (!clip || clip.runId !== drop.runId)
+      throw new AppError("validation", "Choose one of this run's clips.", { fields: { clipId: "Choose one of this run's clips." } });
+    if (clip.status !== "ready")
+      throw new AppError("validation", `The clip ${clip.originalName} is not ready for reading (${clip.status}).`, {
+        fields: { clipId: "This clip is not ready." },
+      });
     const index = (await findFrameIndexSummary(trx, clip.id))!;
     if (p.startFrame >= index.frameCount) {
       const message = `The clip has frames 0 to ${index.frameCount - 1}; frame ${p.startFrame} is past its end.`;
@@ -52,14 +65,20 @@ export async function placeDrop(actor: Actor, id: string, p: PlacementInput): Pr
     }
     // A placer who also reads drops is not told whether anyone has started reading: they may place
     // a drop once, and moving it is left to those who do not read.
-    if (drop.clipId && isReviewer(actor)) throw new AppError("conflict", "This drop is already placed. Because you also read drops, a technician or a lead who does not read moves it.");
+    if (drop.clipId && isReviewer(actor))
+      throw new AppError("conflict", "This drop is already placed. Because you also read drops, a technician or a lead who does not read moves it.");
     if (drop.clipId && (await countReadingsOfDrop(trx, id)) > 0) throw new AppError("conflict", "Reading of this drop has begun, so it stays where it is.");
     await updatePlacement(trx, id, { ...p, placedBy: actor.id });
-    await recordChange(trx, actor, { action: "drop.placed", entity: "drop", entityId: id, before: { clipId: drop.clipId, startFrame: drop.startFrame }, after: p });
+    await recordChange(trx, actor, {
+      action: "drop.placed",
+      entity: "drop",
+      entityId: id,
+      before: { clipId: drop.clipId, startFrame: drop.startFrame },
+      after: p,
+    });
   });
   return getDrop(actor, id);
 }
-
 
 export async function workQueue(actor: Actor): Promise<QueueItem[]> {
   assertCanSeeDrops(actor);

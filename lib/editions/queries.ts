@@ -85,7 +85,8 @@ function toColumns(v: EditionValues) {
 function mapWriteError(err: unknown, name: string): never {
   const e = err as { code?: string; constraint?: string };
   if (e.code === "23505") throw new AppError("conflict", `An edition named ${name} already exists.`, { fields: { name: "This name is already used." } });
-  if (e.constraint === "editions_immutable_in_use") throw new AppError("conflict", "This edition is used by a submission and cannot be changed. Create a new edition from it instead.");
+  if (e.constraint === "editions_immutable_in_use")
+    throw new AppError("conflict", "This edition is used by a submission and cannot be changed. Create a new edition from it instead.");
   throw err;
 }
 
@@ -106,7 +107,9 @@ export async function findEditionInForce(q: Db, onDate: string): Promise<Edition
 
 export async function insertEdition(q: Db, v: EditionValues, createdBy: string): Promise<string> {
   try {
-    const [row] = await q("specification_editions").insert({ ...toColumns(v), based_on_id: v.basedOnId ?? null, created_by: createdBy }).returning("id");
+    const [row] = await q("specification_editions")
+      .insert({ ...toColumns(v), based_on_id: v.basedOnId ?? null, created_by: createdBy })
+      .returning("id");
     return row.id;
   } catch (err) {
     mapWriteError(err, v.name);

@@ -18,8 +18,19 @@ const nonNegative = (label: string) => num(label).refine((v) => v >= 0, `${label
 
 /** The fields of an edition whose value and source a lab sets. */
 export const EDITION_FIELDS = [
-  "minAbsorptionS", "criterion", "belowMinimumRule", "dropsPerBall", "guardBandS", "roundSizes", "toleranceCoverage", "toleranceConfidence",
-  "readingToleranceS", "minAcclimationH", "surfaceTempMinC", "surfaceTempMaxC", "roughnessMaxSdUm",
+  "minAbsorptionS",
+  "criterion",
+  "belowMinimumRule",
+  "dropsPerBall",
+  "guardBandS",
+  "roundSizes",
+  "toleranceCoverage",
+  "toleranceConfidence",
+  "readingToleranceS",
+  "minAcclimationH",
+  "surfaceTempMinC",
+  "surfaceTempMaxC",
+  "roughnessMaxSdUm",
 ] as const;
 
 export const editionInputSchema = z
@@ -29,10 +40,14 @@ export const editionInputSchema = z
     minAbsorptionS: num("Minimum absorption time").refine((v) => v > 0, "Minimum absorption time must be more than zero."),
     criterion: z.enum(CRITERIA, { error: "Choose ball mean or every drop." }),
     belowMinimumRule: z.enum(BELOW_MINIMUM_RULES, { error: "Choose whether a ball below the minimum fails the submission on its own." }).default("fails"),
-    dropsPerBall: num("Drops per ball").pipe(z.number().int("Drops per ball must be a whole number.").min(1, "At least one drop per ball.").max(10, "At most 10 drops per ball.")),
+    dropsPerBall: num("Drops per ball").pipe(
+      z.number().int("Drops per ball must be a whole number.").min(1, "At least one drop per ball.").max(10, "At most 10 drops per ball."),
+    ),
     guardBandS: nonNegative("Guard band"),
     roundSizes: z
-      .array(num("Round size").pipe(z.number().int("Round sizes are whole numbers.").min(1, "A round has at least one sample.")), { error: "Round sizes are required." })
+      .array(num("Round size").pipe(z.number().int("Round sizes are whole numbers.").min(1, "A round has at least one sample.")), {
+        error: "Round sizes are required.",
+      })
       .min(1, "Give at least one round size.")
       .max(10, "At most 10 rounds."),
     toleranceCoverage: probability("Tolerance coverage"),

@@ -41,11 +41,20 @@ export async function updateEdition(actor: Actor, id: string, values: EditionVal
     const before = await findEdition(trx, id);
     if (!before) throw new AppError("not_found", "No such edition.");
     if (before.submissionCount > 0) {
-      throw new AppError("conflict", `This edition is used by ${before.submissionCount} submission(s) and cannot be changed. Create a new edition from it instead.`);
+      throw new AppError(
+        "conflict",
+        `This edition is used by ${before.submissionCount} submission(s) and cannot be changed. Create a new edition from it instead.`,
+      );
     }
     await writeEdition(trx, id, { ...values, basedOnId: before.basedOnId });
     const after = (await findEdition(trx, id))!;
-    await recordChange(trx, actor, { action: "edition.updated", entity: "specification_edition", entityId: id, before: snapshot(before), after: snapshot(after) });
+    await recordChange(trx, actor, {
+      action: "edition.updated",
+      entity: "specification_edition",
+      entityId: id,
+      before: snapshot(before),
+      after: snapshot(after),
+    });
     return after;
   });
 }

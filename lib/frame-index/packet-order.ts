@@ -147,7 +147,10 @@ export function fillFrameTimes(stamped: readonly (number | null)[]): number[] {
   }
   const known = times.flatMap((t, i) => (t === null ? [] : [i]));
   if (known.length === 0) throw new Error("no decoded frame carries a timestamp");
-  const steps = known.slice(1).flatMap((k, j) => (k === known[j] + 1 ? [times[k]! - times[known[j]]!] : [])).sort((a, b) => a - b);
+  const steps = known
+    .slice(1)
+    .flatMap((k, j) => (k === known[j] + 1 ? [times[k]! - times[known[j]]!] : []))
+    .sort((a, b) => a - b);
   const median = steps.length ? steps[Math.floor(steps.length / 2)] : 0;
   const out = [...times];
   const first = known[0];
@@ -159,7 +162,8 @@ export function fillFrameTimes(stamped: readonly (number | null)[]): number[] {
     const [a, b] = [known[j - 1], known[j]];
     if (b === a + 1) continue;
     const step = (times[b]! - times[a]!) / (b - a);
-    if (!Number.isInteger(step) || step <= 0) throw new Error(`frames ${a + 1} to ${b - 1} carry no timestamp and cannot be placed evenly between their neighbours`);
+    if (!Number.isInteger(step) || step <= 0)
+      throw new Error(`frames ${a + 1} to ${b - 1} carry no timestamp and cannot be placed evenly between their neighbours`);
     for (let i = a + 1; i < b; i++) out[i] = times[a]! + step * (i - a);
   }
   return out as number[];

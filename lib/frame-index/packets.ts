@@ -95,7 +95,17 @@ export async function probePacketTimes(file: string): Promise<PacketTimes> {
   const packets: RawPacket[] = [];
   let stream: { timeBase: Rational; startPts: number | null } | null = null;
   let formatName = "";
-  const args = ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags:stream=time_base,start_pts:format=format_name", "-of", "csv=p=1", file];
+  const args = [
+    "-v",
+    "error",
+    "-select_streams",
+    "v:0",
+    "-show_entries",
+    "packet=pts,dts,flags:stream=time_base,start_pts:format=format_name",
+    "-of",
+    "csv=p=1",
+    file,
+  ];
   await streamLines("ffprobe", args, (line) => {
     const p = parseProbeLine(line);
     if (p?.kind === "packet") packets.push(p.packet);

@@ -20,7 +20,24 @@ export interface FrameIndex extends FrameIndexRow {
   pts: number[];
 }
 
-const SUMMARY = ["clip_id", "time_base_num", "time_base_den", "frame_count", "first_pts", "last_pts", "nominal_rate", "average_rate", "variable_rate", "keyframes", "max_keyframe_interval_s", "width", "height", "rotation", "codec", "has_b_frames"];
+const SUMMARY = [
+  "clip_id",
+  "time_base_num",
+  "time_base_den",
+  "frame_count",
+  "first_pts",
+  "last_pts",
+  "nominal_rate",
+  "average_rate",
+  "variable_rate",
+  "keyframes",
+  "max_keyframe_interval_s",
+  "width",
+  "height",
+  "rotation",
+  "codec",
+  "has_b_frames",
+];
 
 function toRow(r: Record<string, any>): FrameIndexRow {
   return {
@@ -72,6 +89,8 @@ export async function findFrameIndexSummary(q: Db, clipId: string): Promise<Fram
 }
 
 export async function findFrameIndex(q: Db, clipId: string): Promise<FrameIndex | undefined> {
-  const r = await q("frame_indexes").where({ clip_id: clipId }).first([...SUMMARY, "pts"]);
+  const r = await q("frame_indexes")
+    .where({ clip_id: clipId })
+    .first([...SUMMARY, "pts"]);
   return r ? { ...toRow(r), pts: decodePts(r.pts) } : undefined;
 }

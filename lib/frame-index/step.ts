@@ -35,5 +35,8 @@ export async function indexStep(clip: ClipRow): Promise<StepOutcome> {
     hasBFrames: probe.video.hasBFrames,
     pts,
   });
-  return { state: "done", detail: { frameCount: summary.frameCount, averageRate: summary.averageRate, variableRate: summary.variableRate, firstPts: summary.firstPts } };
+  return {
+    state: "done",
+    detail: { frameCount: summary.frameCount, averageRate: summary.averageRate, variableRate: summary.variableRate, firstPts: summary.firstPts },
+  };
 }

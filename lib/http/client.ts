@@ -25,7 +25,7 @@ export async function fetchJson<T>(url: string, init: { method?: string; body?: 
     throw new ApiError("The server could not be reached. Check your connection and try again.", 0);
   }
   const text = await res.text();
-  let data: unknown ;
+  let data: unknown;
   try {
     data = text ? JSON.parse(text) : undefined;
   } catch {

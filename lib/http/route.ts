@@ -90,7 +90,6 @@ export function param(params: Params, name: string): string {
   return Array.isArray(v) ? v.join("/") : v;
 }
 
-
 /** A uuid path segment; anything else is simply not found (never a database error). */
 export function idParam(params: Params, name: string, what: string): string {
   const v = param(params, name);

@@ -14,7 +14,14 @@ import { MAX_ATTEMPTS, messageIdOf, retryDelaySeconds } from "./rules";
 export async function sendClaimed(row: OutboxRow, smtpUrl = env().SMTP_URL): Promise<void> {
   const t = nodemailer.createTransport(smtpUrl);
   try {
-    await t.sendMail({ from: env().MAIL_FROM, to: row.toAddress, subject: row.subject, text: row.text, html: row.html, messageId: messageIdOf(row.id, env().MAIL_FROM) });
+    await t.sendMail({
+      from: env().MAIL_FROM,
+      to: row.toAddress,
+      subject: row.subject,
+      text: row.text,
+      html: row.html,
+      messageId: messageIdOf(row.id, env().MAIL_FROM),
+    });
   } finally {
     t.close();
   }

@@ -2,7 +2,12 @@ import type { Db } from "../db";
 
 // Who may get a reviewer digest on a given day.
 
-export interface DigestReviewer { userId: string; email: string; name: string; optOut: string[] }
+export interface DigestReviewer {
+  userId: string;
+  email: string;
+  name: string;
+  optOut: string[];
+}
 
 /**
  * Active reviewers who have set a password (an invitation not yet taken up gets no digest), who did

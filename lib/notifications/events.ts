@@ -17,7 +17,14 @@ import { belowLimitMail, discrepancyMail, resultsReleasedMail } from "./template
 
 /** Leads: a drop's two readings disagree. Once per drop. */
 export async function notifyDiscrepancy(trx: Db, drop: DropRow, differenceS: number | null): Promise<string[]> {
-  const mail = discrepancyMail({ appUrl: env().APP_URL, dropId: drop.id, reference: drop.submissionReference, sampleSerial: drop.sampleSerial, ordinal: drop.ordinal, differenceS });
+  const mail = discrepancyMail({
+    appUrl: env().APP_URL,
+    dropId: drop.id,
+    reference: drop.submissionReference,
+    sampleSerial: drop.sampleSerial,
+    ordinal: drop.ordinal,
+    differenceS,
+  });
   return queueMail(trx, await recipientsWithRole(trx, "lead"), mail, `discrepancy:${drop.id}`);
 }
 
@@ -46,10 +53,17 @@ async function belowLimitMails(trx: Db, drop: Pick<DropRow, "runId" | "submissio
   const reported = new Set(await listReportedBelow(trx, s.id));
   const fresh = results.balls.filter((b) => results.decision.belowBalls.includes(b.serial) && !reported.has(b.sampleId));
   if (!fresh.length) return [];
-  await insertBelowLimitReports(trx, s.id, fresh.map((b) => b.sampleId));
+  await insertBelowLimitReports(
+    trx,
+    s.id,
+    fresh.map((b) => b.sampleId),
+  );
   const { limits } = results;
   const mail = belowLimitMail({
-    appUrl: env().APP_URL, submissionId: s.id, reference: s.reference, modelName: s.modelName,
+    appUrl: env().APP_URL,
+    submissionId: s.id,
+    reference: s.reference,
+    modelName: s.modelName,
     judged: limits.criterion === "every_drop" ? "shortest drop" : "mean",
     limit: `${limits.minAbsorptionS.toFixed(Math.max(1, decimalsOf(limits.minAbsorptionS)))} s`,
     balls: fresh.map((b) => ({ serial: b.serial, value: secsAgainst(b.value as number, judgedThresholds(limits)) })),

@@ -11,6 +11,14 @@ import type { MailContent } from "./templates";
 export async function queueMail(trx: Db, recipients: Recipient[], mail: MailContent, dedupeKey?: string): Promise<string[]> {
   const rows = recipients
     .filter((r) => wantsMail(mail.kind, r.optOut))
-    .map((r) => ({ kind: mail.kind, toAddress: r.email, userId: r.userId, subject: mail.subject, text: mail.text, html: mail.html, dedupeKey: dedupeKey ? `${dedupeKey}:${r.email.toLowerCase()}` : null }));
+    .map((r) => ({
+      kind: mail.kind,
+      toAddress: r.email,
+      userId: r.userId,
+      subject: mail.subject,
+      text: mail.text,
+      html: mail.html,
+      dedupeKey: dedupeKey ? `${dedupeKey}:${r.email.toLowerCase()}` : null,
+    }));
   return insertOutbox(trx, rows);
 }

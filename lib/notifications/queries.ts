@@ -20,11 +20,35 @@ export interface OutboxRow {
   sentAt: Date | null;
 }
 
-const COLUMNS = ["id", "kind", "to_address as toAddress", "user_id as userId", "subject", "text", "html", "status", "attempts", "last_error as lastError", "created_at as createdAt", "sent_at as sentAt"];
+const COLUMNS = [
+  "id",
+  "kind",
+  "to_address as toAddress",
+  "user_id as userId",
+  "subject",
+  "text",
+  "html",
+  "status",
+  "attempts",
+  "last_error as lastError",
+  "created_at as createdAt",
+  "sent_at as sentAt",
+];
 
-export async function insertOutbox(q: Db, rows: { kind: MailKind; toAddress: string; userId: string | null; subject: string; text: string; html: string; dedupeKey: string | null }[]): Promise<string[]> {
+export async function insertOutbox(
+  q: Db,
+  rows: { kind: MailKind; toAddress: string; userId: string | null; subject: string; text: string; html: string; dedupeKey: string | null }[],
+): Promise<string[]> {
   if (!rows.length) return [];
-  const values = rows.map((r) => ({ kind: r.kind, to_address: r.toAddress, user_id: r.userId, subject: r.subject, text: r.text, html: r.html, dedupe_key: r.dedupeKey }));
+  const values = rows.map((r) => ({
+    kind: r.kind,
+    to_address: r.toAddress,
+    user_id: r.userId,
+    subject: r.subject,
+    text: r.text,
+    html: r.html,
+    dedupe_key: r.dedupeKey,
+  }));
   const out = await q("outbox").insert(values).onConflict(q.raw("(dedupe_key) where dedupe_key is not null")).ignore().returning("id");
   return out.map((r: { id: string }) => r.id);
 }
@@ -33,7 +57,11 @@ export async function insertOutbox(q: Db, rows: { kind: MailKind; toAddress: str
 export async function claimOutbox(q: Db, id: string, leaseSeconds: number): Promise<OutboxRow | undefined> {
   const [row] = await q("outbox")
     .where({ id })
-    .where((w) => w.whereIn("status", ["pending", "failed"]).orWhere((s) => s.where("status", "sending").where("claimed_at", "<", q.raw("now() - make_interval(secs => ?)", [leaseSeconds]))))
+    .where((w) =>
+      w
+        .whereIn("status", ["pending", "failed"])
+        .orWhere((s) => s.where("status", "sending").where("claimed_at", "<", q.raw("now() - make_interval(secs => ?)", [leaseSeconds]))),
+    )
     .update({ status: "sending", claimed_at: q.fn.now(), attempts: q.raw("attempts + 1") })
     .returning(COLUMNS);
   return row;
@@ -44,7 +72,9 @@ export async function markSent(q: Db, id: string): Promise<void> {
 }
 
 export async function markFailed(q: Db, id: string, error: string, retryInSeconds: number): Promise<void> {
-  await q("outbox").where({ id, status: "sending" }).update({ status: "failed", last_error: error.slice(0, 1000), next_attempt_at: q.raw("now() + make_interval(secs => ?)", [retryInSeconds]) });
+  await q("outbox")
+    .where({ id, status: "sending" })
+    .update({ status: "failed", last_error: error.slice(0, 1000), next_attempt_at: q.raw("now() + make_interval(secs => ?)", [retryInSeconds]) });
 }
 
 /**
@@ -75,7 +105,11 @@ export async function listOutbox(q: Db, f: { status?: OutboxStatus; limit: numbe
   return b;
 }
 
-export interface Recipient { userId: string | null; email: string; optOut: string[] }
+export interface Recipient {
+  userId: string | null;
+  email: string;
+  optOut: string[];
+}
 
 /** Active users holding a role, with their switched-off kinds. */
 export async function recipientsWithRole(q: Db, role: string): Promise<Recipient[]> {
@@ -85,7 +119,9 @@ export async function recipientsWithRole(q: Db, role: string): Promise<Recipient
 /** An organisation's contact addresses and its active manufacturer users, each address once. */
 export async function organisationRecipients(q: Db, organisationId: string): Promise<Recipient[]> {
   const org = await q("organisations").where({ id: organisationId }).first("contact_emails");
-  const users: Recipient[] = await q("users").where({ organisation_id: organisationId, active: true }).select("id as userId", "email", "notification_opt_out as optOut");
+  const users: Recipient[] = await q("users")
+    .where({ organisation_id: organisationId, active: true })
+    .select("id as userId", "email", "notification_opt_out as optOut");
   const seen = new Set(users.map((u) => u.email.toLowerCase()));
   const contacts = ((org?.contact_emails ?? []) as string[]).filter((e) => !seen.has(e.toLowerCase())).map((email) => ({ userId: null, email, optOut: [] }));
   return [...users, ...contacts];

@@ -8,5 +8,8 @@ export async function listReportedBelow(q: Db, submissionId: string): Promise<st
 
 export async function insertBelowLimitReports(q: Db, submissionId: string, sampleIds: string[]): Promise<void> {
   if (!sampleIds.length) return;
-  await q("below_limit_reports").insert(sampleIds.map((id) => ({ submission_id: submissionId, sample_id: id }))).onConflict(["submission_id", "sample_id"]).ignore();
+  await q("below_limit_reports")
+    .insert(sampleIds.map((id) => ({ submission_id: submissionId, sample_id: id })))
+    .onConflict(["submission_id", "sample_id"])
+    .ignore();
 }

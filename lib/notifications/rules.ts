@@ -5,15 +5,21 @@
 export const KINDS = {
   "discrepancy.new": { label: "A new discrepancy between two readings (leads)", essential: false, roles: ["lead"], why: null },
   "ball.below_limit": {
-    label: "A ball below the limit during testing (manufacturers)", essential: true, roles: ["manufacturer"],
+    label: "A ball below the limit during testing (manufacturers)",
+    essential: true,
+    roles: ["manufacturer"],
     why: "a ball of your model failing the minimum during testing is something you are told at once, whatever your other settings.",
   },
   "samples.requested": {
-    label: "More samples requested (manufacturers)", essential: true, roles: ["manufacturer"],
+    label: "More samples requested (manufacturers)",
+    essential: true,
+    roles: ["manufacturer"],
     why: "testing cannot go on until you send the samples, so the request always reaches you.",
   },
   "results.released": {
-    label: "Results released (manufacturers)", essential: true, roles: ["manufacturer"],
+    label: "Results released (manufacturers)",
+    essential: true,
+    roles: ["manufacturer"],
     why: "the release of your results and test report is the outcome of your submission.",
   },
   "reviewer.digest": { label: "Daily digest of drops waiting for you (reviewers)", essential: false, roles: ["reviewer"], why: null },

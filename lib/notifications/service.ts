@@ -28,7 +28,13 @@ export async function updateMyNotificationSettings(actor: Actor, v: z.infer<type
     const before = await findOptOut(trx, actor.id);
     const after = [...new Set(v.optOut)].sort();
     await updateOptOut(trx, actor.id, after);
-    await recordChange(trx, actor, { action: "user.notifications_changed", entity: "user", entityId: actor.id, before: { optOut: before }, after: { optOut: after } });
+    await recordChange(trx, actor, {
+      action: "user.notifications_changed",
+      entity: "user",
+      entityId: actor.id,
+      before: { optOut: before },
+      after: { optOut: after },
+    });
   });
   return getMyNotificationSettings(actor);
 }

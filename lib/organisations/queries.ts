@@ -18,7 +18,8 @@ export async function findOrganisation(q: Db, id: string): Promise<OrganisationR
 }
 
 function duplicate(err: unknown, name: string): never {
-  if (isUniqueViolation(err)) throw new AppError("conflict", `An organisation named ${name} already exists.`, { fields: { name: "This name is already used." } });
+  if (isUniqueViolation(err))
+    throw new AppError("conflict", `An organisation named ${name} already exists.`, { fields: { name: "This name is already used." } });
   throw err;
 }
 

@@ -89,18 +89,31 @@ export async function insertReading(
   reviewerName = "",
 ): Promise<ReadingRow> {
   const [row] = await q("readings")
-    .insert({ drop_id: r.dropId, clip_id: r.clipId, reviewer_id: r.reviewerId, slot: r.slot, supersedes_id: r.supersedesId, correction_reason: r.correctionReason, ...markColumns(r) })
+    .insert({
+      drop_id: r.dropId,
+      clip_id: r.clipId,
+      reviewer_id: r.reviewerId,
+      slot: r.slot,
+      supersedes_id: r.supersedesId,
+      correction_reason: r.correctionReason,
+      ...markColumns(r),
+    })
     .returning("*");
   return toReading({ ...row, reviewer_name: reviewerName });
 }
 
 export async function updateDraftMarks(q: Db, id: string, m: MarkColumns): Promise<void> {
-  await q("readings").where({ id, status: "draft" }).update({ ...markColumns(m), updated_at: q.fn.now() });
+  await q("readings")
+    .where({ id, status: "draft" })
+    .update({ ...markColumns(m), updated_at: q.fn.now() });
 }
 
 /** Returns the moment recorded as submitted. */
 export async function markSubmitted(q: Db, id: string): Promise<Date> {
-  const [row] = await q("readings").where({ id, status: "draft" }).update({ status: "submitted", submitted_at: q.fn.now(), updated_at: q.fn.now() }).returning("submitted_at");
+  const [row] = await q("readings")
+    .where({ id, status: "draft" })
+    .update({ status: "submitted", submitted_at: q.fn.now(), updated_at: q.fn.now() })
+    .returning("submitted_at");
   return row.submitted_at;
 }
 

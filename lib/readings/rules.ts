@@ -37,7 +37,10 @@ export interface DropTime {
 /** The time of a drop from its two marked frames, with the frame-quantisation uncertainty (GUM). */
 export function dropTime(ix: FrameTimes, dispenseFrame: number, clearFrame: number): DropTime | MarkProblem {
   const n = ix.pts.length;
-  for (const [name, f] of [["dispense", dispenseFrame], ["clear", clearFrame]] as const) {
+  for (const [name, f] of [
+    ["dispense", dispenseFrame],
+    ["clear", clearFrame],
+  ] as const) {
     if (!Number.isInteger(f) || f < 0 || f >= n) return { ok: false, reason: `The ${name} frame ${f} is outside the clip, which has frames 0 to ${n - 1}.` };
   }
   if (clearFrame <= dispenseFrame) return { ok: false, reason: `The clear frame (${clearFrame}) must come after the dispense frame (${dispenseFrame}).` };
@@ -78,7 +81,6 @@ export function compareReadings(
   const agreed = within(timeDifferenceS) && within(dispenseDifferenceS) && within(clearDifferenceS);
   return { agreed, timeDifferenceS, dispenseDifferenceS, clearDifferenceS, agreedValueS: agreed ? (time(a) + time(b)) / 2 : null };
 }
-
 
 export interface ChainReading {
   id: string;
@@ -137,13 +139,25 @@ export interface Marks {
 /** Looks each marked frame up in the index; with both marks, the drop time and its uncertainty. */
 export function marksFrom(ix: FrameTimes, dispenseFrame: number | null, clearFrame: number | null): Marks | MarkProblem {
   const n = ix.pts.length;
-  for (const [name, f] of [["dispense", dispenseFrame], ["clear", clearFrame]] as const) {
-    if (f !== null && (!Number.isInteger(f) || f < 0 || f >= n)) return { ok: false, reason: `The ${name} frame ${f} is outside the clip, which has frames 0 to ${n - 1}.` };
+  for (const [name, f] of [
+    ["dispense", dispenseFrame],
+    ["clear", clearFrame],
+  ] as const) {
+    if (f !== null && (!Number.isInteger(f) || f < 0 || f >= n))
+      return { ok: false, reason: `The ${name} frame ${f} is outside the clip, which has frames 0 to ${n - 1}.` };
   }
   const none = { timeS: null, uncertaintyStandardS: null, uncertaintyExpandedS: null };
   const pts = (f: number | null) => (f === null ? null : ix.pts[f]);
   if (dispenseFrame === null || clearFrame === null) return { dispenseFrame, clearFrame, dispensePts: pts(dispenseFrame), clearPts: pts(clearFrame), ...none };
   const t = dropTime(ix, dispenseFrame, clearFrame);
   if (!t.ok) return t;
-  return { dispenseFrame, clearFrame, dispensePts: t.dispensePts, clearPts: t.clearPts, timeS: t.seconds, uncertaintyStandardS: t.uncertainty.standard, uncertaintyExpandedS: t.uncertainty.expanded };
+  return {
+    dispenseFrame,
+    clearFrame,
+    dispensePts: t.dispensePts,
+    clearPts: t.clearPts,
+    timeS: t.seconds,
+    uncertaintyStandardS: t.uncertainty.standard,
+    uncertaintyExpandedS: t.uncertainty.expanded,
+  };
 }

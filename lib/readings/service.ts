@@ -27,8 +27,10 @@ async function lockedDrop(actor: Actor, q: Db, dropId: string): Promise<DropRow>
 
 /** The clip must still be fit to read: the drop's own clip, and ready. */
 function assertReadable(drop: DropRow, clipId: string): void {
-  if (drop.clipStatus === "rejected" && drop.clipId === clipId) throw new AppError("conflict", `The clip was rejected (${drop.clipRejectReason ?? "no reason recorded"}); no marks can be made on it.`);
-  if (drop.clipStatus !== "ready" || drop.clipId !== clipId || !drop.timeBase) throw new AppError("conflict", "The clip of this drop is not ready for reading.");
+  if (drop.clipStatus === "rejected" && drop.clipId === clipId)
+    throw new AppError("conflict", `The clip was rejected (${drop.clipRejectReason ?? "no reason recorded"}); no marks can be made on it.`);
+  if (drop.clipStatus !== "ready" || drop.clipId !== clipId || !drop.timeBase)
+    throw new AppError("conflict", "The clip of this drop is not ready for reading.");
 }
 
 /** Looks the marks up in the clip's frame index, once the clip is known to be fit to read. */
@@ -61,7 +63,11 @@ export async function startReading(actor: Actor, dropId: string, marks: MarksInp
       if (marks.dispenseFrame !== undefined || marks.clearFrame !== undefined) await applyMarks(trx, drop, draft, marks);
       return dropViewFor(actor, trx, dropId);
     }
-    if (mine.length) throw new AppError("conflict", "You have already read this drop. The other reading must come from another reviewer; to fix your own, record a correction.");
+    if (mine.length)
+      throw new AppError(
+        "conflict",
+        "You have already read this drop. The other reading must come from another reviewer; to fix your own, record a correction.",
+      );
     const heads = readings.filter((r) => r.supersedesId === null);
     if (heads.length >= 2 || !isBeingRead(drop.state)) throw new AppError("conflict", "This drop already has its two readers.");
     const m = await lookUpMarks(trx, drop, drop.clipId, marks.dispenseFrame ?? null, marks.clearFrame ?? null);
@@ -111,7 +117,8 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
     const r = readings.find((x) => x.id === id);
     if (!drop || !r || r.reviewerId !== actor.id) throw new AppError("not_found", NO_READING);
     if (r.status !== "draft") throw new AppError("conflict", "This reading is already submitted.");
-    if (r.dispenseFrame === null || r.clearFrame === null) throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
+    if (r.dispenseFrame === null || r.clearFrame === null)
+      throw new AppError("validation", "Mark both the dispense frame and the clear frame before submitting.");
     assertReadable(drop, r.clipId);
     if (r.supersedesId && currentReadings(readings).length >= 2) throw new AppError("conflict", BOTH_IN);
     // The marks were looked up in the frame index when they were saved, and an index never changes.
@@ -126,10 +133,21 @@ export async function submitReading(actor: Actor, id: string): Promise<DropView>
       dispenseDifferenceS: a?.dispenseDifferenceS ?? null,
       clearDifferenceS: a?.clearDifferenceS ?? null,
     };
-    await recordChange(trx, actor, { action: r.supersedesId ? "reading.corrected" : "reading.submitted", entity: "reading", entityId: id, after: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame, timeS: r.timeS, supersedes: r.supersedesId } });
+    await recordChange(trx, actor, {
+      action: r.supersedesId ? "reading.corrected" : "reading.submitted",
+      entity: "reading",
+      entityId: id,
+      after: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame, timeS: r.timeS, supersedes: r.supersedesId },
+    });
     if (o.state === drop.state) return toDropView(actor, drop, after);
     await updateDropOutcome(trx, drop.id, outcome);
-    await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: drop.id, before: { state: drop.state }, after: { state: o.state, agreement: a } });
+    await recordChange(trx, actor, {
+      action: "drop.state_changed",
+      entity: "drop",
+      entityId: drop.id,
+      before: { state: drop.state },
+      after: { state: o.state, agreement: a },
+    });
     // Mail in the same transaction: leads for a new discrepancy, the manufacturer for a ball newly below the limit.
     if (o.state === "discrepancy") await notifyDiscrepancy(trx, drop, outcome.timeDifferenceS);
     if (o.state === "agreed") await notifyBelowLimit(trx, drop);
@@ -150,12 +168,17 @@ export async function correctReading(actor: Actor, id: string, reason: string): 
     if (r.status !== "submitted") throw new AppError("conflict", "This reading is still a draft: change its marks directly.");
     if (current.length >= 2) throw new AppError("conflict", BOTH_IN);
     if (!current.some((c) => c.id === r.id)) throw new AppError("conflict", "This reading was already replaced by a correction.");
-    if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft")) throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");
+    if (readings.some((x) => x.reviewerId === actor.id && x.status === "draft"))
+      throw new AppError("conflict", "You already have an unfinished reading of this drop: finish or discard it first.");
     assertReadable(drop, r.clipId);
     // The draft starts from the submitted marks, already looked up in the frame index.
     const { dispenseFrame, clearFrame, dispensePts, clearPts, timeS, uncertaintyStandardS, uncertaintyExpandedS } = r;
     const marks = { dispenseFrame, clearFrame, dispensePts, clearPts, timeS, uncertaintyStandardS, uncertaintyExpandedS };
-    const draft = await insertReading(trx, { dropId: r.dropId, clipId: r.clipId, reviewerId: actor.id, slot: r.slot, supersedesId: r.id, correctionReason: reason, ...marks }, actor.name);
+    const draft = await insertReading(
+      trx,
+      { dropId: r.dropId, clipId: r.clipId, reviewerId: actor.id, slot: r.slot, supersedesId: r.id, correctionReason: reason, ...marks },
+      actor.name,
+    );
     await recordChange(trx, actor, { action: "reading.correction_started", entity: "reading", entityId: draft.id, after: { supersedes: r.id, reason } });
     return toDropView(actor, drop, [...readings, draft]);
   });
@@ -167,7 +190,12 @@ export async function discardDraft(actor: Actor, id: string): Promise<DropView> 
     await lockedDrop(actor, trx, r.dropId);
     if (r.status !== "draft") throw new AppError("conflict", "A submitted reading is kept for good; record a correction instead.");
     await deleteDraft(trx, id);
-    await recordChange(trx, actor, { action: "reading.discarded", entity: "reading", entityId: id, before: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame } });
+    await recordChange(trx, actor, {
+      action: "reading.discarded",
+      entity: "reading",
+      entityId: id,
+      before: { dropId: r.dropId, dispenseFrame: r.dispenseFrame, clearFrame: r.clearFrame },
+    });
     return dropViewFor(actor, trx, r.dropId);
   });
 }

@@ -7,14 +7,42 @@ import type { ReportData } from "./data";
 // papaparse quotes per RFC 4180; times are ISO 8601 in UTC; empty cells mean "none yet".
 
 export const DROP_COLUMNS = [
-  "submission", "sample_serial", "round", "run_id", "tested_at", "drop", "state", "first_reader", "second_reader",
-  "first_dispense_frame", "first_clear_frame", "second_dispense_frame", "second_clear_frame",
-  "first_time_s", "second_time_s", "uncertainty_s", "agreed_time_s", "clip_sha256",
+  "submission",
+  "sample_serial",
+  "round",
+  "run_id",
+  "tested_at",
+  "drop",
+  "state",
+  "first_reader",
+  "second_reader",
+  "first_dispense_frame",
+  "first_clear_frame",
+  "second_dispense_frame",
+  "second_clear_frame",
+  "first_time_s",
+  "second_time_s",
+  "uncertainty_s",
+  "agreed_time_s",
+  "clip_sha256",
 ] as const;
 
 export const BALL_COLUMNS = [
-  "submission", "sample_serial", "round", "weight_g", "n", "mean_s", "sd_s", "min_s", "max_s", "range_s",
-  "judged_value_s", "status", "dixon_q", "dixon_critical", "outlier_drop",
+  "submission",
+  "sample_serial",
+  "round",
+  "weight_g",
+  "n",
+  "mean_s",
+  "sd_s",
+  "min_s",
+  "max_s",
+  "range_s",
+  "judged_value_s",
+  "status",
+  "dixon_q",
+  "dixon_critical",
+  "outlier_drop",
 ] as const;
 
 /**
@@ -53,9 +81,24 @@ export function dropsCsv(r: ReportData): string {
     const t = timeDecimals(d.timeBase);
     const [a, b] = [d.readings.find((x) => x.slot === 1), d.readings.find((x) => x.slot === 2)];
     return [
-      r.submission.reference, d.serial, d.round, d.runId, d.testedAt, d.ordinal, d.state, cell(a?.reader), cell(b?.reader),
-      cell(a?.dispenseFrame), cell(a?.clearFrame), cell(b?.dispenseFrame), cell(b?.clearFrame),
-      at(a?.timeS, t), at(b?.timeS, t), at(d.uncertaintyS, UNCERTAINTY_DECIMALS), at(d.timeS, t), cell(d.clipSha256),
+      r.submission.reference,
+      d.serial,
+      d.round,
+      d.runId,
+      d.testedAt,
+      d.ordinal,
+      d.state,
+      cell(a?.reader),
+      cell(b?.reader),
+      cell(a?.dispenseFrame),
+      cell(a?.clearFrame),
+      cell(b?.dispenseFrame),
+      cell(b?.clearFrame),
+      at(a?.timeS, t),
+      at(b?.timeS, t),
+      at(d.uncertaintyS, UNCERTAINTY_DECIMALS),
+      at(d.timeS, t),
+      cell(d.clipSha256),
     ];
   });
   return csv(DROP_COLUMNS, rows);
@@ -70,9 +113,21 @@ export function ballsCsv(r: ReportData): string {
   const rows = r.balls.map((b) => {
     const outlier = b.drops.find((d) => d.outlier);
     return [
-      r.submission.reference, b.serial, b.round, b.weightG, b.n, judgedAt(every ? null : b.mean, b.mean), at(b.sd, STAT_DECIMALS),
-      judgedAt(every ? b.min : null, b.min), at(b.max, STAT_DECIMALS), at(b.range, STAT_DECIMALS),
-      judgedAt(b.value, b.value), b.status, at(b.dixon?.q, DIXON_DECIMALS), at(b.dixon?.critical, DIXON_DECIMALS), cell(outlier?.ordinal),
+      r.submission.reference,
+      b.serial,
+      b.round,
+      b.weightG,
+      b.n,
+      judgedAt(every ? null : b.mean, b.mean),
+      at(b.sd, STAT_DECIMALS),
+      judgedAt(every ? b.min : null, b.min),
+      at(b.max, STAT_DECIMALS),
+      at(b.range, STAT_DECIMALS),
+      judgedAt(b.value, b.value),
+      b.status,
+      at(b.dixon?.q, DIXON_DECIMALS),
+      at(b.dixon?.critical, DIXON_DECIMALS),
+      cell(outlier?.ordinal),
     ];
   });
   return csv(BALL_COLUMNS, rows);

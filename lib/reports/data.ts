@@ -49,7 +49,10 @@ export interface ReportDrop {
 export interface ReportData {
   labName: string;
   generatedAt: string;
-  submission: Pick<SubmissionRow, "id" | "reference" | "organisationName" | "modelName" | "kind" | "receivedOn" | "status" | "currentRound" | "approvalReference">;
+  submission: Pick<
+    SubmissionRow,
+    "id" | "reference" | "organisationName" | "modelName" | "kind" | "receivedOn" | "status" | "currentRound" | "approvalReference"
+  >;
   edition: EditionRow;
   samples: ReportSample[];
   drops: ReportDrop[];
@@ -64,7 +67,11 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
   const s = await visibleSubmission(actor, submissionId);
   const q = db();
   const signOff = await signOffPart(q, s.id);
-  assertCanSeeReport(actor, s, signOff.history.some((h) => h.signature));
+  assertCanSeeReport(
+    actor,
+    s,
+    signOff.history.some((h) => h.signature),
+  );
   const [results, samples, runs, marks, clips] = await Promise.all([
     loadSubmissionResults(q, s),
     listSamples(q, s.id),
@@ -75,7 +82,15 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
   const { edition, balls, decision } = results;
   const reportSamples = samples.map((x) => {
     const run = countingRun(runs.filter((r) => r.sampleId === x.id));
-    return { id: x.id, serial: x.serial, round: x.round, weightG: x.weightG, weightLb: x.weightG / GRAMS_PER_POUND, receivedAt: x.receivedAt.toISOString(), run: run ? toRunView(run, x, edition) : null };
+    return {
+      id: x.id,
+      serial: x.serial,
+      round: x.round,
+      weightG: x.weightG,
+      weightLb: x.weightG / GRAMS_PER_POUND,
+      receivedAt: x.receivedAt.toISOString(),
+      run: run ? toRunView(run, x, edition) : null,
+    };
   });
   const sha = new Map(clips.map((c) => [c.id, c.sha256]));
   const timeBase = new Map(clips.map((c) => [c.id, c.timeBase]));
@@ -84,16 +99,42 @@ export async function reportData(actor: Actor, submissionId: string): Promise<Re
     return b.drops.map((d) => {
       const m = marks.find((x) => x.id === d.id);
       return {
-        id: d.id, runId: b.runId!, serial: b.serial, round: b.round, ordinal: d.ordinal, state: m?.state ?? "unread",
-        testedAt: sample.run?.testedAt ?? "", clipSha256: m?.clipId ? (sha.get(m.clipId) ?? null) : null, timeBase: m?.clipId ? (timeBase.get(m.clipId) ?? null) : null,
-        readings: m?.readings ?? [], timeS: d.timeS, uncertaintyS: d.uncertaintyS, outlier: d.outlier,
+        id: d.id,
+        runId: b.runId!,
+        serial: b.serial,
+        round: b.round,
+        ordinal: d.ordinal,
+        state: m?.state ?? "unread",
+        testedAt: sample.run?.testedAt ?? "",
+        clipSha256: m?.clipId ? (sha.get(m.clipId) ?? null) : null,
+        timeBase: m?.clipId ? (timeBase.get(m.clipId) ?? null) : null,
+        readings: m?.readings ?? [],
+        timeS: d.timeS,
+        uncertaintyS: d.uncertaintyS,
+        outlier: d.outlier,
       };
     });
   });
   return {
     labName: env().LAB_NAME,
     generatedAt: new Date().toISOString(),
-    submission: { id: s.id, reference: s.reference, organisationName: s.organisationName, modelName: s.modelName, kind: s.kind, receivedOn: s.receivedOn, status: s.status, currentRound: s.currentRound, approvalReference: s.approvalReference },
-    edition, samples: reportSamples, drops, balls, decision, clips, signOff,
+    submission: {
+      id: s.id,
+      reference: s.reference,
+      organisationName: s.organisationName,
+      modelName: s.modelName,
+      kind: s.kind,
+      receivedOn: s.receivedOn,
+      status: s.status,
+      currentRound: s.currentRound,
+      approvalReference: s.approvalReference,
+    },
+    edition,
+    samples: reportSamples,
+    drops,
+    balls,
+    decision,
+    clips,
+    signOff,
   };
 }

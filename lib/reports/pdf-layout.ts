@@ -33,12 +33,21 @@ export function ensureRoom(doc: Doc, height: number): void {
 export function heading(doc: Doc, text: string): void {
   // A heading never ends a page: it keeps room for a table head and a few rows below it.
   ensureRoom(doc, 90);
-  doc.moveDown(0.8).font(BOLD).fontSize(12).fillColor(INK).text(text, MARGIN.left, doc.y, { width: contentWidth(doc) });
+  doc
+    .moveDown(0.8)
+    .font(BOLD)
+    .fontSize(12)
+    .fillColor(INK)
+    .text(text, MARGIN.left, doc.y, { width: contentWidth(doc) });
   doc.moveDown(0.3).font(REGULAR).fontSize(9);
 }
 
 export function paragraph(doc: Doc, text: string, opts: { size?: number; color?: string; bold?: boolean } = {}): void {
-  doc.font(opts.bold ? BOLD : REGULAR).fontSize(opts.size ?? 9).fillColor(opts.color ?? INK).text(text, MARGIN.left, doc.y, { width: contentWidth(doc) });
+  doc
+    .font(opts.bold ? BOLD : REGULAR)
+    .fontSize(opts.size ?? 9)
+    .fillColor(opts.color ?? INK)
+    .text(text, MARGIN.left, doc.y, { width: contentWidth(doc) });
   doc.fillColor(INK).font(REGULAR).fontSize(9);
 }
 
@@ -70,7 +79,15 @@ export function table(doc: Doc, columns: Column[], rows: string[][], size = 8): 
   const draw = (cells: string[], font: string, shade: boolean) => {
     const h = heightOf(cells, font);
     const y = doc.y;
-    if (shade) doc.rect(MARGIN.left, y, columns.reduce((a, c) => a + c.width, 0), h).fill("#f3f4f6");
+    if (shade)
+      doc
+        .rect(
+          MARGIN.left,
+          y,
+          columns.reduce((a, c) => a + c.width, 0),
+          h,
+        )
+        .fill("#f3f4f6");
     let x = MARGIN.left;
     doc.font(font).fontSize(size).fillColor(INK);
     cells.forEach((c, i) => {
@@ -80,10 +97,25 @@ export function table(doc: Doc, columns: Column[], rows: string[][], size = 8): 
     doc.y = y + h;
   };
   const head = () => {
-    draw(columns.map((c) => c.head), BOLD, false);
-    doc.moveTo(MARGIN.left, doc.y).lineTo(MARGIN.left + columns.reduce((a, c) => a + c.width, 0), doc.y).lineWidth(0.6).strokeColor(RULE).stroke();
+    draw(
+      columns.map((c) => c.head),
+      BOLD,
+      false,
+    );
+    doc
+      .moveTo(MARGIN.left, doc.y)
+      .lineTo(MARGIN.left + columns.reduce((a, c) => a + c.width, 0), doc.y)
+      .lineWidth(0.6)
+      .strokeColor(RULE)
+      .stroke();
   };
-  ensureRoom(doc, heightOf(columns.map((c) => c.head), BOLD) + 20);
+  ensureRoom(
+    doc,
+    heightOf(
+      columns.map((c) => c.head),
+      BOLD,
+    ) + 20,
+  );
   head();
   rows.forEach((r, i) => {
     if (doc.y + heightOf(r, REGULAR) > bottom(doc)) {
@@ -107,7 +139,11 @@ export function box(doc: Doc, title: string, lines: string[]): void {
   ensureRoom(doc, h + 10);
   const y = doc.y;
   doc.rect(MARGIN.left, y, w, h).lineWidth(1.5).strokeColor(INK).stroke();
-  doc.font(BOLD).fontSize(13).fillColor(INK).text(title, MARGIN.left + 12, y + 10, { width: inner });
+  doc
+    .font(BOLD)
+    .fontSize(13)
+    .fillColor(INK)
+    .text(title, MARGIN.left + 12, y + 10, { width: inner });
   doc.font(REGULAR).fontSize(9.5);
   for (const l of lines) doc.moveDown(0.3).text(l, MARGIN.left + 12, doc.y, { width: inner });
   doc.y = y + h + 6;
@@ -130,13 +166,40 @@ export function furnish(doc: Doc, header: { lab: string; title: string; referenc
     doc.page.margins.bottom = 0;
     if (header.draft) draftBar(doc);
     const accent = header.draft ? ALERT : RULE;
-    doc.font(BOLD).fontSize(9).fillColor(INK).text(header.lab, MARGIN.left, 30, { width: w * 0.4, lineBreak: false, ellipsis: true });
-    doc.font(REGULAR).fontSize(9).text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w * 0.4, 30, { width: w * 0.6, align: "right", lineBreak: false });
-    if (header.draft) doc.font(BOLD).fontSize(8).fillColor(ALERT).text("DRAFT: not signed off, not a released result", MARGIN.left, 50, { width: w, align: "right", lineBreak: false });
-    doc.fillColor(INK).moveTo(MARGIN.left, 46).lineTo(MARGIN.left + w, 46).lineWidth(header.draft ? 1.2 : 0.6).strokeColor(accent).stroke();
+    doc
+      .font(BOLD)
+      .fontSize(9)
+      .fillColor(INK)
+      .text(header.lab, MARGIN.left, 30, { width: w * 0.4, lineBreak: false, ellipsis: true });
+    doc
+      .font(REGULAR)
+      .fontSize(9)
+      .text(`${header.title} · ${header.reference} · ${header.revision}`, MARGIN.left + w * 0.4, 30, { width: w * 0.6, align: "right", lineBreak: false });
+    if (header.draft)
+      doc
+        .font(BOLD)
+        .fontSize(8)
+        .fillColor(ALERT)
+        .text("DRAFT: not signed off, not a released result", MARGIN.left, 50, { width: w, align: "right", lineBreak: false });
+    doc
+      .fillColor(INK)
+      .moveTo(MARGIN.left, 46)
+      .lineTo(MARGIN.left + w, 46)
+      .lineWidth(header.draft ? 1.2 : 0.6)
+      .strokeColor(accent)
+      .stroke();
     const fy = doc.page.height - 56;
-    doc.moveTo(MARGIN.left, fy - 4).lineTo(MARGIN.left + w, fy - 4).lineWidth(0.6).strokeColor(RULE).stroke();
-    doc.font(REGULAR).fontSize(7).fillColor(MUTED).text(caution, MARGIN.left, fy, { width: w - 70 });
+    doc
+      .moveTo(MARGIN.left, fy - 4)
+      .lineTo(MARGIN.left + w, fy - 4)
+      .lineWidth(0.6)
+      .strokeColor(RULE)
+      .stroke();
+    doc
+      .font(REGULAR)
+      .fontSize(7)
+      .fillColor(MUTED)
+      .text(caution, MARGIN.left, fy, { width: w - 70 });
     doc.text(`Page ${i - range.start + 1} of ${range.count}`, MARGIN.left + w - 70, fy, { width: 70, align: "right", lineBreak: false });
     doc.page.margins.bottom = saved;
   }

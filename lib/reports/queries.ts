@@ -57,7 +57,20 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     .where("x.submission_id", submissionId)
     .where("c.status", "ready")
     .orderBy([{ column: "x.round" }, { column: "x.serial" }, { column: "c.created_at" }])
-    .select("c.id", "c.run_id", "c.original_name", "c.sha256", "c.trim", "f.frame_count", "f.nominal_rate", "f.average_rate", "f.first_pts", "f.last_pts", "f.time_base_num", "f.time_base_den");
+    .select(
+      "c.id",
+      "c.run_id",
+      "c.original_name",
+      "c.sha256",
+      "c.trim",
+      "f.frame_count",
+      "f.nominal_rate",
+      "f.average_rate",
+      "f.first_pts",
+      "f.last_pts",
+      "f.time_base_num",
+      "f.time_base_den",
+    );
   return rows.map((r) => ({
     id: r.id,
     runId: r.run_id,
@@ -68,7 +81,10 @@ export async function listReportClips(q: Db, submissionId: string): Promise<Repo
     averageRate: r.average_rate,
     timeBase: r.time_base_num ? { num: r.time_base_num, den: r.time_base_den } : null,
     trimNote: r.trim
-      ? trimKept(r.trim, r.frame_count ? { firstPts: Number(r.first_pts), lastPts: Number(r.last_pts), timeBase: { num: r.time_base_num, den: r.time_base_den } } : null).note
+      ? trimKept(
+          r.trim,
+          r.frame_count ? { firstPts: Number(r.first_pts), lastPts: Number(r.last_pts), timeBase: { num: r.time_base_num, den: r.time_base_den } } : null,
+        ).note
       : null,
   }));
 }

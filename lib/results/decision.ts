@@ -88,9 +88,20 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
     toleranceProblem = `The lower tolerance limit of ${values.length} balls could not be computed (${err instanceof Error ? err.message : String(err)}).`;
   }
   const warn = belowSentence(below, limits, finalRound);
-  const base = { round, finalRound, tolerance, belowBalls: below.map((b) => b.serial), belowNote: warn, closeBalls: close.map((b) => b.serial), pendingBalls: pending.map((b) => b.serial) };
+  const base = {
+    round,
+    finalRound,
+    tolerance,
+    belowBalls: below.map((b) => b.serial),
+    belowNote: warn,
+    closeBalls: close.map((b) => b.serial),
+    pendingBalls: pending.map((b) => b.serial),
+  };
   const L = limitSecs(limits.minAbsorptionS);
-  const waiting = [...pending.map((b) => `${b.serial} (${b.pendingReason})`), ...(missing > 0 ? [`${missing} sample${missing === 1 ? "" : "s"} of round ${round} not received`] : [])];
+  const waiting = [
+    ...pending.map((b) => `${b.serial} (${b.pendingReason})`),
+    ...(missing > 0 ? [`${missing} sample${missing === 1 ? "" : "s"} of round ${round} not received`] : []),
+  ];
 
   if (below.length > 0 && limits.belowMinimumRule === "fails") {
     // The outcome cannot change, whatever the other balls and rounds show.
@@ -110,8 +121,14 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       ...base,
       decision: "pending",
       decidedBy: null,
-      explanation: sentences(`Round ${round}: ${inScope.length - pending.length} of ${inScope.length + missing} balls have results. Waiting: ${waiting.join("; ")}.`, warn),
-      nextAction: missing > 0 ? `Receive and test the rest of round ${round}.` : `Finish the runs and readings of round ${round}; the decision follows when every ball has a result.`,
+      explanation: sentences(
+        `Round ${round}: ${inScope.length - pending.length} of ${inScope.length + missing} balls have results. Waiting: ${waiting.join("; ")}.`,
+        warn,
+      ),
+      nextAction:
+        missing > 0
+          ? `Receive and test the rest of round ${round}.`
+          : `Finish the runs and readings of round ${round}; the decision follows when every ball has a result.`,
       nextRound: null,
     };
   }
@@ -130,7 +147,9 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
   }
   if (!finalRound) {
     const size = limits.roundSizes[round];
-    const closeWords = close.length ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${limitSecs(limits.guardBandS)} guard band: ${ballList(close, limits)}.` : "";
+    const closeWords = close.length
+      ? `${close.length} of ${n} balls ${close.length === 1 ? "is" : "are"} close to the ${L} minimum, inside its ${limitSecs(limits.guardBandS)} guard band: ${ballList(close, limits)}.`
+      : "";
     return {
       ...base,
       decision: "close to limit — more samples",
@@ -157,7 +176,9 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
       decision: ok ? "meets limit" : "below limit",
       decidedBy: "single ball",
       explanation: `1 ball (${inScope[0].serial}), so no tolerance limit can be computed; its ${judged(limits)} ${secsAgainst(values[0], judgedThresholds(limits))} is ${ok ? "at or above" : "below"} the ${L} minimum.`,
-      nextAction: ok ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
+      nextAction: ok
+        ? "A lead reviews the results and signs them off."
+        : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
       nextRound: null,
     };
   }
@@ -167,8 +188,13 @@ export function judgeSubmission(limits: ResultLimits, balls: BallResult[], curre
     ...base,
     decision: tolerance.passes ? "meets limit" : "below limit",
     decidedBy: "tolerance limit",
-    explanation: sentences(`${balls_}; lower ${level} tolerance limit ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`, warn),
-    nextAction: tolerance.passes ? "A lead reviews the results and signs them off." : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
+    explanation: sentences(
+      `${balls_}; lower ${level} tolerance limit ${secsAgainst(tolerance.limit, limits.minAbsorptionS)} is ${tolerance.passes ? "at or above" : "below"} the ${L} minimum; ${fraction}.`,
+      warn,
+    ),
+    nextAction: tolerance.passes
+      ? "A lead reviews the results and signs them off."
+      : "Report the result to the manufacturer; a lead reviews the results and signs them off.",
     nextRound: null,
   };
 }

@@ -57,7 +57,12 @@ export async function getSubmissionResults(actor: Actor, id: string, q: Db = db(
   if (s.kind === "surveillance" && s.approvalSubmissionId) {
     const a = (await findSubmission(q, s.approvalSubmissionId))!;
     const approval = await loadSubmissionResults(q, a);
-    surveillance = compareWithApproval(own.limits, own.balls, { submissionId: a.id, reference: a.reference, decision: approval.decision.decision, balls: approval.balls });
+    surveillance = compareWithApproval(own.limits, own.balls, {
+      submissionId: a.id,
+      reference: a.reference,
+      decision: approval.decision.decision,
+      balls: approval.balls,
+    });
   }
   return toResultsView(s, own.edition, own, surveillance);
 }

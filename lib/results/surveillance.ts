@@ -31,7 +31,10 @@ export function compareWithApproval(
   const ms = m.length ? summarize(m) : null;
   const as = a.length ? summarize(a) : null;
   const tolerance = toleranceJudgement(m, limits);
-  const head = { approval: { submissionId: approval.submissionId, reference: approval.reference, decision: approval.decision, summary: as }, market: { summary: ms, tolerance } };
+  const head = {
+    approval: { submissionId: approval.submissionId, reference: approval.reference, decision: approval.decision, summary: as },
+    market: { summary: ms, tolerance },
+  };
   const L = limitSecs(limits.minAbsorptionS);
   const what = judged(limits);
 
@@ -43,11 +46,12 @@ export function compareWithApproval(
   const pending = market.some((b) => b.status === "pending") || !ms;
   const stillMeets = pending ? null : tolerance ? tolerance.passes : (ms as SampleSummary).mean >= limits.minAbsorptionS;
 
-  const compare = !ms || !as
-    ? `No ${!ms ? "market" : "approval"} ball has a result yet, so the two cannot be compared.`
-    : difference
-      ? `Market samples (${ms.n} ball${ms.n === 1 ? "" : "s"}) average ${secs(ms.mean)}, ${secs(Math.abs(difference.value))} ${difference.value < 0 ? "below" : "above"} the approval's ${secs(as.mean)} (${pct(difference.confidence)} Welch interval ${signed(difference.lower, 1)} to ${signed(difference.upper, 1)} s).`
-      : `Market samples average ${secs(ms.mean)} against the approval's ${secs(as.mean)}; an interval for the difference needs at least 2 balls on each side.`;
+  const compare =
+    !ms || !as
+      ? `No ${!ms ? "market" : "approval"} ball has a result yet, so the two cannot be compared.`
+      : difference
+        ? `Market samples (${ms.n} ball${ms.n === 1 ? "" : "s"}) average ${secs(ms.mean)}, ${secs(Math.abs(difference.value))} ${difference.value < 0 ? "below" : "above"} the approval's ${secs(as.mean)} (${pct(difference.confidence)} Welch interval ${signed(difference.lower, 1)} to ${signed(difference.upper, 1)} s).`
+        : `Market samples average ${secs(ms.mean)} against the approval's ${secs(as.mean)}; an interval for the difference needs at least 2 balls on each side.`;
   const judgement = pending
     ? "The judgement waits until every market ball has a result."
     : tolerance

@@ -67,9 +67,19 @@ export async function insertRuling(q: Db, r: Omit<RulingRow, "id" | "ruledAt" | 
 export async function insertThirdReading(q: Db, r: { dropId: string; clipId: string; reviewerId: string } & Marks): Promise<string> {
   const [row] = await q("readings")
     .insert({
-      drop_id: r.dropId, clip_id: r.clipId, reviewer_id: r.reviewerId, slot: 3, status: "submitted", submitted_at: q.fn.now(),
-      dispense_frame: r.dispenseFrame, clear_frame: r.clearFrame, dispense_pts: r.dispensePts, clear_pts: r.clearPts,
-      time_s: r.timeS, uncertainty_standard_s: r.uncertaintyStandardS, uncertainty_expanded_s: r.uncertaintyExpandedS,
+      drop_id: r.dropId,
+      clip_id: r.clipId,
+      reviewer_id: r.reviewerId,
+      slot: 3,
+      status: "submitted",
+      submitted_at: q.fn.now(),
+      dispense_frame: r.dispenseFrame,
+      clear_frame: r.clearFrame,
+      dispense_pts: r.dispensePts,
+      clear_pts: r.clearPts,
+      time_s: r.timeS,
+      uncertainty_standard_s: r.uncertaintyStandardS,
+      uncertainty_expanded_s: r.uncertaintyExpandedS,
     })
     .returning("id");
   return row.id;

@@ -44,11 +44,18 @@ export async function ruleDrop(actor: Actor, dropId: string, input: RulingInput)
     const drop = await findDrop(trx, dropId, { lock: true });
     if (!drop) throw new AppError("not_found", NO_DROP);
     const existing = await findRulingOfDrop(trx, dropId);
-    if (existing) throw new AppError("conflict", `This drop was already ruled by ${existing.ruledByName} on ${existing.ruledAt.toISOString().slice(0, 10)}; a ruling stands once made.`);
+    if (existing)
+      throw new AppError(
+        "conflict",
+        `This drop was already ruled by ${existing.ruledByName} on ${existing.ruledAt.toISOString().slice(0, 10)}; a ruling stands once made.`,
+      );
     if (drop.state !== "discrepancy") throw new AppError("conflict", `Only a drop whose readings disagree can be ruled; this one is ${drop.state}.`);
     const readings = await listReadingsOfDrop(trx, dropId);
     const current = currentReadings(readings).filter((r) => r.slot <= 2);
-    assertNotAParty(actor, readings.map((r) => r.reviewerId));
+    assertNotAParty(
+      actor,
+      readings.map((r) => r.reviewerId),
+    );
     let readingId: string;
     let timeS: number;
     let third: (Marks & { timeS: number }) | null = null;
@@ -65,9 +72,22 @@ export async function ruleDrop(actor: Actor, dropId: string, input: RulingInput)
     await setRuled(trx, dropId, timeS);
     // A ruled drop has settled: it may complete a ball that is below the limit.
     await notifyBelowLimit(trx, drop);
-    const after = { dropId, chosen: input.chosen, readingId, timeS, reason: input.reason, ...(third ? { dispenseFrame: third.dispenseFrame, clearFrame: third.clearFrame } : {}) };
+    const after = {
+      dropId,
+      chosen: input.chosen,
+      readingId,
+      timeS,
+      reason: input.reason,
+      ...(third ? { dispenseFrame: third.dispenseFrame, clearFrame: third.clearFrame } : {}),
+    };
     await recordChange(trx, actor, { action: "ruling.made", entity: "ruling", entityId: id, after });
-    await recordChange(trx, actor, { action: "drop.state_changed", entity: "drop", entityId: dropId, before: { state: drop.state, agreedTimeS: drop.agreedTimeS }, after: { state: "ruled", agreedTimeS: timeS } });
+    await recordChange(trx, actor, {
+      action: "drop.state_changed",
+      entity: "drop",
+      entityId: dropId,
+      before: { state: drop.state, agreedTimeS: drop.agreedTimeS },
+      after: { state: "ruled", agreedTimeS: timeS },
+    });
     return toRulingView((await findRulingOfDrop(trx, dropId))!);
   });
 }

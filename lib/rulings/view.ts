@@ -12,5 +12,14 @@ export interface RulingView {
 }
 
 export function toRulingView(r: RulingRow): RulingView {
-  return { id: r.id, dropId: r.dropId, chosen: r.chosen, readingId: r.readingId, timeS: r.timeS, reason: r.reason, ruledBy: { id: r.ruledBy, name: r.ruledByName }, ruledAt: r.ruledAt.toISOString() };
+  return {
+    id: r.id,
+    dropId: r.dropId,
+    chosen: r.chosen,
+    readingId: r.readingId,
+    timeS: r.timeS,
+    reason: r.reason,
+    ruledBy: { id: r.ruledBy, name: r.ruledByName },
+    ruledAt: r.ruledAt.toISOString(),
+  };
 }

@@ -32,7 +32,11 @@ export interface RunRow {
   dropCount: number;
 }
 
-export type RunColumns = Omit<RunValues, "roomTemp" | "surfaceTemp" | "dispenserCheck"> & { roomTempC: number; surfaceTempC: number; dispenserCheck: RunValues["dispenserCheck"] };
+export type RunColumns = Omit<RunValues, "roomTemp" | "surfaceTemp" | "dispenserCheck"> & {
+  roomTempC: number;
+  surfaceTempC: number;
+  dispenserCheck: RunValues["dispenserCheck"];
+};
 
 function toRun(r: Record<string, any>): RunRow {
   return {
@@ -71,7 +75,13 @@ const base = (q: Db) =>
     .join("users as t", "t.id", "r.technician_id")
     .leftJoin("users as a", "a.id", "r.accepted_by")
     .leftJoin("users as v", "v.id", "r.voided_by")
-    .select("r.*", "t.name as technician_name", "a.name as accepted_by_name", "v.name as voided_by_name", q.raw("(select count(*) from drops d where d.run_id = r.id) as drop_count"));
+    .select(
+      "r.*",
+      "t.name as technician_name",
+      "a.name as accepted_by_name",
+      "v.name as voided_by_name",
+      q.raw("(select count(*) from drops d where d.run_id = r.id) as drop_count"),
+    );
 
 function columns(v: RunColumns) {
   return {
@@ -92,14 +102,18 @@ function columns(v: RunColumns) {
 }
 
 export async function insertRun(q: Db, sampleId: string, technicianId: string, v: RunColumns, drops: number): Promise<string> {
-  const [row] = await q("runs").insert({ ...columns(v), sample_id: sampleId, technician_id: technicianId }).returning("id");
+  const [row] = await q("runs")
+    .insert({ ...columns(v), sample_id: sampleId, technician_id: technicianId })
+    .returning("id");
   await q("drops").insert(Array.from({ length: drops }, (_, i) => ({ run_id: row.id, ordinal: i + 1 })));
   return row.id;
 }
 
 /** Replaces the conditions; any earlier acceptance of flagged conditions no longer applies. */
 export async function updateRunRow(q: Db, id: string, v: RunColumns): Promise<void> {
-  await q("runs").where({ id }).update({ ...columns(v), accepted_by: null, accepted_at: null, accept_reason: null, updated_at: q.fn.now() });
+  await q("runs")
+    .where({ id })
+    .update({ ...columns(v), accepted_by: null, accepted_at: null, accept_reason: null, updated_at: q.fn.now() });
 }
 
 export async function setAcceptance(q: Db, id: string, by: string, reason: string): Promise<void> {
@@ -124,11 +138,10 @@ export async function findRun(q: Db, id: string, opts: { lock?: boolean } = {}):
  * that counts never depends on where rows happen to sit.
  */
 export async function listRunsOfSubmission(q: Db, submissionId: string): Promise<RunRow[]> {
-  const rows = await base(q).join("samples as x", "x.id", "r.sample_id").where("x.submission_id", submissionId).orderBy([
-    { column: "r.tested_at" },
-    { column: "r.created_at" },
-    { column: "r.id" },
-  ]);
+  const rows = await base(q)
+    .join("samples as x", "x.id", "r.sample_id")
+    .where("x.submission_id", submissionId)
+    .orderBy([{ column: "r.tested_at" }, { column: "r.created_at" }, { column: "r.id" }]);
   return rows.map(toRun);
 }
 
@@ -148,12 +161,27 @@ export async function findRunConditions(q: Db, submissionIds: string[]): Promise
     .join("specification_editions as e", "e.id", "s.edition_id")
     .whereIn("s.id", submissionIds)
     .whereNull("r.voided_at")
-    .select("s.id as submission_id", "r.accepted_at", "r.tested_at", "x.acclimation_started_at", "r.surface_temp_c", "r.roughness_ra_um",
-      "e.min_acclimation_h", "e.surface_temp_min_c", "e.surface_temp_max_c", "e.roughness_max_sd_um");
+    .select(
+      "s.id as submission_id",
+      "r.accepted_at",
+      "r.tested_at",
+      "x.acclimation_started_at",
+      "r.surface_temp_c",
+      "r.roughness_ra_um",
+      "e.min_acclimation_h",
+      "e.surface_temp_min_c",
+      "e.surface_temp_max_c",
+      "e.roughness_max_sd_um",
+    );
   return rows.map((r) => ({
     submissionId: r.submission_id,
     accepted: r.accepted_at !== null,
     input: { testedAt: r.tested_at, acclimationStartedAt: r.acclimation_started_at, surfaceTempC: r.surface_temp_c, roughnessRaUm: r.roughness_ra_um },
-    limits: { minAcclimationH: r.min_acclimation_h, surfaceTempMinC: r.surface_temp_min_c, surfaceTempMaxC: r.surface_temp_max_c, roughnessMaxSdUm: r.roughness_max_sd_um },
+    limits: {
+      minAcclimationH: r.min_acclimation_h,
+      surfaceTempMinC: r.surface_temp_min_c,
+      surfaceTempMaxC: r.surface_temp_max_c,
+      roughnessMaxSdUm: r.roughness_max_sd_um,
+    },
   }));
 }

@@ -17,19 +17,42 @@ import { toRunView, type RunView } from "./view";
 
 function toColumns(v: RunValues): RunColumns {
   const { roomTemp, surfaceTemp, ...rest } = v;
-  return { ...rest, dispenserCheck: rest.dispenserCheck ?? null, roomTempC: toCelsius(roomTemp.value, roomTemp.unit), surfaceTempC: toCelsius(surfaceTemp.value, surfaceTemp.unit) };
+  return {
+    ...rest,
+    dispenserCheck: rest.dispenserCheck ?? null,
+    roomTempC: toCelsius(roomTemp.value, roomTemp.unit),
+    surfaceTempC: toCelsius(surfaceTemp.value, surfaceTemp.unit),
+  };
 }
 
 /** With why the run's forms are closed while its submission is signed off (null while it may change). */
-export type RunDetail = RunView & { submissionId: string; submissionReference: string; sampleSerial: string; limits: ConditionLimits; lockedReason: string | null };
+export type RunDetail = RunView & {
+  submissionId: string;
+  submissionReference: string;
+  sampleSerial: string;
+  limits: ConditionLimits;
+  lockedReason: string | null;
+};
 
 async function viewOf(q: Db, run: RunRow): Promise<RunDetail> {
   const sample = (await findSample(q, run.sampleId))!;
   const submission = (await findSubmission(q, sample.submissionId))!;
   const edition = (await findEdition(q, submission.editionId))!;
-  const limits = { minAcclimationH: edition.minAcclimationH, surfaceTempMinC: edition.surfaceTempMinC, surfaceTempMaxC: edition.surfaceTempMaxC, roughnessMaxSdUm: edition.roughnessMaxSdUm };
+  const limits = {
+    minAcclimationH: edition.minAcclimationH,
+    surfaceTempMinC: edition.surfaceTempMinC,
+    surfaceTempMaxC: edition.surfaceTempMaxC,
+    roughnessMaxSdUm: edition.roughnessMaxSdUm,
+  };
   const lock = await lockedReason(submission.id, q);
-  return { ...toRunView(run, sample, edition), submissionId: submission.id, submissionReference: submission.reference, sampleSerial: sample.serial, limits, lockedReason: lock };
+  return {
+    ...toRunView(run, sample, edition),
+    submissionId: submission.id,
+    submissionReference: submission.reference,
+    sampleSerial: sample.serial,
+    limits,
+    lockedReason: lock,
+  };
 }
 
 async function visibleRun(actor: Actor, id: string, q: Db = db()): Promise<RunRow> {
@@ -88,7 +111,13 @@ export async function acceptRun(actor: Actor, id: string, reason: string): Promi
     if (before.acceptedAt) throw new AppError("conflict", `This run was already accepted by ${before.acceptedByName}.`);
     await setAcceptance(trx, id, actor.id, reason);
     const after = await viewOf(trx, (await findRun(trx, id))!);
-    await recordChange(trx, actor, { action: "run.accepted", entity: "run", entityId: id, before: { flags: before.flags }, after: { flags: after.flags, reason } });
+    await recordChange(trx, actor, {
+      action: "run.accepted",
+      entity: "run",
+      entityId: id,
+      before: { flags: before.flags },
+      after: { flags: after.flags, reason },
+    });
     // The run's ball now has a result if its drops are settled: it may be below the limit.
     await notifyBelowLimit(trx, { runId: id, submissionId });
     return after;
@@ -108,7 +137,13 @@ export async function voidRun(actor: Actor, id: string, reason: string): Promise
     const before = notVoided((await findRun(trx, id, { lock: true }))!, "a voided run stays voided. Record a new run if the ball is to be tested again");
     await setVoid(trx, id, actor.id, reason);
     const after = await viewOf(trx, (await findRun(trx, id))!);
-    await recordChange(trx, actor, { action: "run.voided", entity: "run", entityId: id, before: { voidedAt: before.voidedAt }, after: { voidedAt: after.voidedAt, reason } });
+    await recordChange(trx, actor, {
+      action: "run.voided",
+      entity: "run",
+      entityId: id,
+      before: { voidedAt: before.voidedAt },
+      after: { voidedAt: after.voidedAt, reason },
+    });
     // The ball's run before this one counts again, and may give it a result below the limit.
     await notifyBelowLimit(trx, { runId: id, submissionId });
     return after;
@@ -121,6 +156,16 @@ function notVoided(run: RunRow, so: string): RunRow {
 }
 
 function snapshot(r: RunDetail) {
-  const { technicianName: _t, acceptedByName: _a, voidedByName: _v, dropCount: _d, roughness: _r, limits: _l, submissionReference: _s, lockedReason: _k, ...rest } = r;
+  const {
+    technicianName: _t,
+    acceptedByName: _a,
+    voidedByName: _v,
+    dropCount: _d,
+    roughness: _r,
+    limits: _l,
+    submissionReference: _s,
+    lockedReason: _k,
+    ...rest
+  } = r;
   return rest;
 }

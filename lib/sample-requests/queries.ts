@@ -6,9 +6,19 @@ const base = (q: Db) =>
     .join("users as rb", "rb.id", "r.requested_by")
     .leftJoin("users as ab", "ab.id", "r.acknowledged_by")
     .select(
-      "r.id", "r.submission_id as submissionId", "r.round", "r.count", "r.weight", q.raw("to_char(r.due_by, 'YYYY-MM-DD') as \"dueBy\""), "r.note",
-      "rb.name as requestedByName", "r.requested_at as requestedAt", "ab.name as acknowledgedByName", "r.acknowledged_at as acknowledgedAt",
-      "r.shipping_details as shippingDetails", q.raw("to_char(r.shipped_on, 'YYYY-MM-DD') as \"shippedOn\""),
+      "r.id",
+      "r.submission_id as submissionId",
+      "r.round",
+      "r.count",
+      "r.weight",
+      q.raw("to_char(r.due_by, 'YYYY-MM-DD') as \"dueBy\""),
+      "r.note",
+      "rb.name as requestedByName",
+      "r.requested_at as requestedAt",
+      "ab.name as acknowledgedByName",
+      "r.acknowledged_at as acknowledgedAt",
+      "r.shipping_details as shippingDetails",
+      q.raw("to_char(r.shipped_on, 'YYYY-MM-DD') as \"shippedOn\""),
     );
 
 export async function listSampleRequests(q: Db, submissionId: string): Promise<SampleRequestRow[]> {
@@ -21,7 +31,10 @@ export async function findSampleRequest(q: Db, id: string, opts: { lock?: boolea
   return b;
 }
 
-export async function insertSampleRequest(q: Db, v: { submissionId: string; round: number; count: number; weight: string; dueBy: string; note: string; requestedBy: string }): Promise<string> {
+export async function insertSampleRequest(
+  q: Db,
+  v: { submissionId: string; round: number; count: number; weight: string; dueBy: string; note: string; requestedBy: string },
+): Promise<string> {
   const [row] = await q("sample_requests")
     .insert({ submission_id: v.submissionId, round: v.round, count: v.count, weight: v.weight, due_by: v.dueBy, note: v.note, requested_by: v.requestedBy })
     .returning("id");
@@ -29,7 +42,9 @@ export async function insertSampleRequest(q: Db, v: { submissionId: string; roun
 }
 
 export async function acknowledgeRow(q: Db, id: string, v: { by: string; shippingDetails: string; shippedOn: string | null }): Promise<void> {
-  await q("sample_requests").where({ id }).update({ acknowledged_by: v.by, acknowledged_at: q.fn.now(), shipping_details: v.shippingDetails, shipped_on: v.shippedOn });
+  await q("sample_requests")
+    .where({ id })
+    .update({ acknowledged_by: v.by, acknowledged_at: q.fn.now(), shipping_details: v.shippingDetails, shipped_on: v.shippedOn });
 }
 
 /** Raises the submission to the requested round and marks it waiting for the samples. */

@@ -26,7 +26,8 @@ export async function listSampleRequests(actor: Actor, submissionId: string): Pr
 /** Asks the manufacturer for the next round's samples; the submission moves to that round and waits. */
 export async function requestSamples(actor: Actor, submissionId: string, v: SampleRequestInput): Promise<SampleRequestRow> {
   assertCanEditIntake(actor);
-  if (v.dueBy < new Date().toISOString().slice(0, 10)) throw new AppError("validation", "The due date is in the past.", { fields: { dueBy: "Choose today or a later date." } });
+  if (v.dueBy < new Date().toISOString().slice(0, 10))
+    throw new AppError("validation", "The due date is in the past.", { fields: { dueBy: "Choose today or a later date." } });
   return db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
     const s = await visibleSubmission(actor, submissionId, trx);
@@ -35,9 +36,25 @@ export async function requestSamples(actor: Actor, submissionId: string, v: Samp
     const round = s.currentRound + 1;
     const id = await insertSampleRequest(trx, { submissionId, round, ...v, requestedBy: actor.id });
     await startRound(trx, submissionId, round);
-    const mail = samplesRequestedMail({ appUrl: env().APP_URL, submissionId, reference: s.reference, modelName: s.modelName, round, count: v.count, weight: v.weight, dueBy: v.dueBy, note: v.note });
+    const mail = samplesRequestedMail({
+      appUrl: env().APP_URL,
+      submissionId,
+      reference: s.reference,
+      modelName: s.modelName,
+      round,
+      count: v.count,
+      weight: v.weight,
+      dueBy: v.dueBy,
+      note: v.note,
+    });
     await queueMail(trx, await organisationRecipients(trx, s.organisationId), mail, `samples:${id}`);
-    await recordChange(trx, actor, { action: "sample_request.created", entity: "sample_request", entityId: id, before: { currentRound: s.currentRound, status: s.status }, after: { submissionId, round, ...v, status: "awaiting_samples" } });
+    await recordChange(trx, actor, {
+      action: "sample_request.created",
+      entity: "sample_request",
+      entityId: id,
+      before: { currentRound: s.currentRound, status: s.status },
+      after: { submissionId, round, ...v, status: "awaiting_samples" },
+    });
     return (await findSampleRequest(trx, id))!;
   });
 }
@@ -53,7 +70,12 @@ export async function acknowledgeRequest(actor: Actor, id: string, v: Acknowledg
     });
     if (r.acknowledgedAt) throw new AppError("conflict", "This request is already acknowledged.");
     await acknowledgeRow(trx, id, { by: actor.id, shippingDetails: v.shippingDetails, shippedOn: v.shippedOn ?? null });
-    await recordChange(trx, actor, { action: "sample_request.acknowledged", entity: "sample_request", entityId: id, after: { shippingDetails: v.shippingDetails, shippedOn: v.shippedOn ?? null } });
+    await recordChange(trx, actor, {
+      action: "sample_request.acknowledged",
+      entity: "sample_request",
+      entityId: id,
+      after: { shippingDetails: v.shippingDetails, shippedOn: v.shippedOn ?? null },
+    });
     return (await findSampleRequest(trx, id))!;
   });
 }

@@ -33,7 +33,7 @@ export function parseSampleCsv(text: string, defaultUnit: MassUnit): CsvResult {
 
   const first = data[0].map((c) => c.trim().toLowerCase().replace(/\s+/g, "_"));
   const hasHeader = first.includes("serial");
-  const order: (Column | null)[] = hasHeader ? first.map((h) => (COLUMNS as readonly string[]).includes(h) ? (h as Column) : null) : [...COLUMNS];
+  const order: (Column | null)[] = hasHeader ? first.map((h) => ((COLUMNS as readonly string[]).includes(h) ? (h as Column) : null)) : [...COLUMNS];
   if (hasHeader && !order.includes("weight")) errors.push({ line: 1, reason: "The header has no weight column." });
   const body = hasHeader ? data.slice(1) : data;
   if (body.length > MAX_CSV_ROWS) errors.push({ line: MAX_CSV_ROWS + 1, reason: `At most ${MAX_CSV_ROWS} samples in one file.` });

@@ -39,7 +39,8 @@ function toSample(r: Record<string, any>): SampleRow {
 const base = (q: Db) => q("samples as x").select("x.*", q.raw("(select count(*) from runs r where r.sample_id = x.id) as run_count"));
 
 function duplicate(err: unknown, serial: string): never {
-  if (isUniqueViolation(err)) throw new AppError("conflict", `Serial ${serial} is already recorded for this submission.`, { fields: { serial: "This serial is already recorded." } });
+  if (isUniqueViolation(err))
+    throw new AppError("conflict", `Serial ${serial} is already recorded for this submission.`, { fields: { serial: "This serial is already recorded." } });
   throw err;
 }
 
@@ -47,7 +48,17 @@ export async function insertSamples(q: Db, submissionId: string, samples: NewSam
   if (samples.length === 0) return [];
   try {
     const rows = await q("samples")
-      .insert(samples.map((s) => ({ submission_id: submissionId, serial: s.serial, weight_g: s.weightG, round: s.round, received_at: s.receivedAt, acclimation_started_at: s.acclimationStartedAt, notes: s.notes })))
+      .insert(
+        samples.map((s) => ({
+          submission_id: submissionId,
+          serial: s.serial,
+          weight_g: s.weightG,
+          round: s.round,
+          received_at: s.receivedAt,
+          acclimation_started_at: s.acclimationStartedAt,
+          notes: s.notes,
+        })),
+      )
       .returning("id");
     return rows.map((r) => r.id);
   } catch (err) {
@@ -61,7 +72,11 @@ export async function findSample(q: Db, id: string): Promise<SampleRow | undefin
 }
 
 export async function listSamples(q: Db, submissionId: string): Promise<SampleRow[]> {
-  return (await base(q).where("x.submission_id", submissionId).orderBy([{ column: "x.round" }, { column: "x.serial" }])).map(toSample);
+  return (
+    await base(q)
+      .where("x.submission_id", submissionId)
+      .orderBy([{ column: "x.round" }, { column: "x.serial" }])
+  ).map(toSample);
 }
 
 export async function existingSerials(q: Db, submissionId: string, serials: string[]): Promise<string[]> {
@@ -72,7 +87,11 @@ export async function existingSerials(q: Db, submissionId: string, serials: stri
   return rows.map((r) => r.serial);
 }
 
-export async function updateSampleRow(q: Db, id: string, patch: Partial<Pick<NewSample, "serial" | "weightG" | "acclimationStartedAt" | "notes">>): Promise<void> {
+export async function updateSampleRow(
+  q: Db,
+  id: string,
+  patch: Partial<Pick<NewSample, "serial" | "weightG" | "acclimationStartedAt" | "notes">>,
+): Promise<void> {
   const row: Record<string, unknown> = {};
   if (patch.serial !== undefined) row.serial = patch.serial;
   if (patch.weightG !== undefined) row.weight_g = patch.weightG;

@@ -30,7 +30,14 @@ export async function addSample(actor: Actor, submissionId: string, v: Values<ty
   return db().transaction(async (trx) => {
     await assertUnlocked(trx, submissionId);
     const [id] = await insertSamples(trx, submissionId, [
-      { serial: v.serial, weightG: toGrams(v.weight.value, v.weight.unit), round: v.round ?? submission.currentRound, receivedAt: v.receivedAt, acclimationStartedAt: v.acclimationStartedAt ?? null, notes: v.notes },
+      {
+        serial: v.serial,
+        weightG: toGrams(v.weight.value, v.weight.unit),
+        round: v.round ?? submission.currentRound,
+        receivedAt: v.receivedAt,
+        acclimationStartedAt: v.acclimationStartedAt ?? null,
+        notes: v.notes,
+      },
     ]);
     const created = (await findSample(trx, id))!;
     await recordChange(trx, actor, { action: "sample.created", entity: "sample", entityId: id, after: snapshot(created) });
@@ -47,14 +54,31 @@ export async function importSamples(actor: Actor, submissionId: string, v: Value
   return db().transaction(async (trx) => {
     await lockSubmission(trx, submissionId);
     await assertUnlocked(trx, submissionId);
-    const taken = new Set((await existingSerials(trx, submissionId, parsed.rows.map((r) => r.serial))).map((s) => s.toLowerCase()));
-    const clashes = parsed.rows.filter((r) => taken.has(r.serial.toLowerCase())).map((r) => ({ line: r.line, reason: `Serial ${r.serial} is already recorded for this submission.` }));
+    const taken = new Set(
+      (
+        await existingSerials(
+          trx,
+          submissionId,
+          parsed.rows.map((r) => r.serial),
+        )
+      ).map((s) => s.toLowerCase()),
+    );
+    const clashes = parsed.rows
+      .filter((r) => taken.has(r.serial.toLowerCase()))
+      .map((r) => ({ line: r.line, reason: `Serial ${r.serial} is already recorded for this submission.` }));
     if (clashes.length) throw csvError(clashes);
     const round = v.round ?? submission.currentRound;
     const ids = await insertSamples(
       trx,
       submissionId,
-      parsed.rows.map((r) => ({ serial: r.serial, weightG: r.weightG, round, receivedAt: r.receivedAt ?? v.receivedAt, acclimationStartedAt: r.acclimationStartedAt, notes: r.notes })),
+      parsed.rows.map((r) => ({
+        serial: r.serial,
+        weightG: r.weightG,
+        round,
+        receivedAt: r.receivedAt ?? v.receivedAt,
+        acclimationStartedAt: r.acclimationStartedAt,
+        notes: r.notes,
+      })),
     );
     await recordChange(trx, actor, {
       action: "sample.imported",
@@ -69,7 +93,10 @@ export async function importSamples(actor: Actor, submissionId: string, v: Value
 function csvError(errors: CsvRowError[]): AppError {
   const fields = Object.fromEntries(errors.map((e) => [`line ${e.line}`, e.reason]));
   const n = errors.length;
-  return new AppError("validation", `${n} row${n === 1 ? "" : "s"} of the CSV ${n === 1 ? "needs" : "need"} correcting; nothing was saved.`, { fields, details: errors });
+  return new AppError("validation", `${n} row${n === 1 ? "" : "s"} of the CSV ${n === 1 ? "needs" : "need"} correcting; nothing was saved.`, {
+    fields,
+    details: errors,
+  });
 }
 
 export async function updateSample(actor: Actor, id: string, v: Values<typeof sampleUpdateSchema>): Promise<SampleView> {

@@ -23,29 +23,63 @@ export interface ReopeningRow {
 }
 
 const toSignature = (r: Record<string, any>): SignatureRow => ({
-  id: r.id, submissionId: r.submission_id, revision: r.revision, signedBy: r.signed_by, signedByName: r.signed_by_name,
-  signedAt: r.signed_at, meaning: r.meaning, results: r.results, changes: r.changes,
+  id: r.id,
+  submissionId: r.submission_id,
+  revision: r.revision,
+  signedBy: r.signed_by,
+  signedByName: r.signed_by_name,
+  signedAt: r.signed_at,
+  meaning: r.meaning,
+  results: r.results,
+  changes: r.changes,
 });
 
 export async function listSignatures(q: Db, submissionId: string): Promise<SignatureRow[]> {
-  const rows = await q("signatures as g").join("users as u", "u.id", "g.signed_by").select("g.*", "u.name as signed_by_name").where("g.submission_id", submissionId).orderBy("g.revision");
+  const rows = await q("signatures as g")
+    .join("users as u", "u.id", "g.signed_by")
+    .select("g.*", "u.name as signed_by_name")
+    .where("g.submission_id", submissionId)
+    .orderBy("g.revision");
   return rows.map(toSignature);
 }
 
 export async function listReopenings(q: Db, submissionId: string): Promise<ReopeningRow[]> {
-  const rows = await q("reopenings as o").join("users as u", "u.id", "o.reopened_by").select("o.*", "u.name as reopened_by_name").where("o.submission_id", submissionId).orderBy("o.revision");
-  return rows.map((r) => ({ id: r.id, submissionId: r.submission_id, revision: r.revision, reason: r.reason, reopenedBy: r.reopened_by, reopenedByName: r.reopened_by_name, reopenedAt: r.reopened_at }));
+  const rows = await q("reopenings as o")
+    .join("users as u", "u.id", "o.reopened_by")
+    .select("o.*", "u.name as reopened_by_name")
+    .where("o.submission_id", submissionId)
+    .orderBy("o.revision");
+  return rows.map((r) => ({
+    id: r.id,
+    submissionId: r.submission_id,
+    revision: r.revision,
+    reason: r.reason,
+    reopenedBy: r.reopened_by,
+    reopenedByName: r.reopened_by_name,
+    reopenedAt: r.reopened_at,
+  }));
 }
 
-export async function insertSignature(q: Db, s: { submissionId: string; revision: number; signedBy: string; results: unknown; changes: unknown }): Promise<string> {
+export async function insertSignature(
+  q: Db,
+  s: { submissionId: string; revision: number; signedBy: string; results: unknown; changes: unknown },
+): Promise<string> {
   const [row] = await q("signatures")
-    .insert({ submission_id: s.submissionId, revision: s.revision, signed_by: s.signedBy, results: JSON.stringify(s.results), changes: s.changes === null ? null : JSON.stringify(s.changes) })
+    .insert({
+      submission_id: s.submissionId,
+      revision: s.revision,
+      signed_by: s.signedBy,
+      results: JSON.stringify(s.results),
+      changes: s.changes === null ? null : JSON.stringify(s.changes),
+    })
     .returning("id");
   return row.id;
 }
 
 export async function insertReopening(q: Db, r: { submissionId: string; revision: number; reason: string; reopenedBy: string }): Promise<string> {
-  const [row] = await q("reopenings").insert({ submission_id: r.submissionId, revision: r.revision, reason: r.reason, reopened_by: r.reopenedBy }).returning("id");
+  const [row] = await q("reopenings")
+    .insert({ submission_id: r.submissionId, revision: r.revision, reason: r.reason, reopened_by: r.reopenedBy })
+    .returning("id");
   return row.id;
 }
 

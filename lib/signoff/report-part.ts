@@ -52,7 +52,10 @@ export function changeLines(c: ResultChanges): string[] {
   const lines: string[] = [];
   if (c.decision) lines.push(`Decision: from ${c.decision.before} to ${c.decision.after}.`);
   for (const b of c.balls) {
-    const parts = [b.mean && `mean from ${mean(b.mean.before)} to ${mean(b.mean.after)}`, b.status && `status from ${b.status.before} to ${b.status.after}`].filter(Boolean);
+    const parts = [
+      b.mean && `mean from ${mean(b.mean.before)} to ${mean(b.mean.after)}`,
+      b.status && `status from ${b.status.before} to ${b.status.after}`,
+    ].filter(Boolean);
     lines.push(`${b.serial}: ${parts.join("; ")}.`);
   }
   if (c.ballsAdded.length) lines.push(`Balls added: ${c.ballsAdded.join(", ")}.`);
@@ -63,7 +66,11 @@ export function changeLines(c: ResultChanges): string[] {
 const toSignature = (g: SignatureRow): ReportSignature => ({ by: g.signedByName, at: g.signedAt.toISOString(), meaning: g.meaning, revision: g.revision });
 
 export async function signOffPart(q: Db, submissionId: string): Promise<SignOffPart> {
-  const [rulings, signed, reopened] = await Promise.all([listRulingsOfSubmission(q, submissionId), listSignatures(q, submissionId), listReopenings(q, submissionId)]);
+  const [rulings, signed, reopened] = await Promise.all([
+    listRulingsOfSubmission(q, submissionId),
+    listSignatures(q, submissionId),
+    listReopenings(q, submissionId),
+  ]);
   const revision = currentRevision({ reopenedRevisions: reopened.map((r) => r.revision) });
   const current = signed.find((g) => g.revision === revision);
   const reopening = reopened.find((r) => r.revision === revision);
@@ -89,7 +96,9 @@ export async function signOffPart(q: Db, submissionId: string): Promise<SignOffP
     changes: reopening
       ? {
           reopenReason: reopening.reason,
-          lines: current?.changes ? changeLines(current.changes as ResultChanges) : ["The changes in the results are recorded when a lead signs this revision off."],
+          lines: current?.changes
+            ? changeLines(current.changes as ResultChanges)
+            : ["The changes in the results are recorded when a lead signs this revision off."],
         }
       : null,
   };

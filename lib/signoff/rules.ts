@@ -27,7 +27,8 @@ export function lockReason(s: LockState): string | null {
 export function signRefusal(r: { ballCount: number; decision: string; explanation: string; nextAction: string }): string | null {
   if (r.ballCount === 0) return "This submission has no ball results yet, so there is nothing to sign off.";
   if (r.decision === "pending") return `The decision is still pending. ${r.explanation} Results can be signed off once it is made.`;
-  if (r.decision === "close to limit — more samples") return `The decision asks for more samples: ${r.nextAction} Results can be signed off once the last round gives a final decision.`;
+  if (r.decision === "close to limit — more samples")
+    return `The decision asks for more samples: ${r.nextAction} Results can be signed off once the last round gives a final decision.`;
   return null;
 }
 

@@ -40,12 +40,21 @@ export async function getSignOff(actor: Actor, submissionId: string): Promise<Si
     submissionId,
     revision,
     locked,
-    signatures: signed.map((g) => ({ revision: g.revision, signedBy: g.signedByName, signedAt: g.signedAt.toISOString(), meaning: g.meaning, changes: (g.changes as ResultChanges | null) ?? null })),
+    signatures: signed.map((g) => ({
+      revision: g.revision,
+      signedBy: g.signedByName,
+      signedAt: g.signedAt.toISOString(),
+      meaning: g.meaning,
+      changes: (g.changes as ResultChanges | null) ?? null,
+    })),
     reopenings: reopened.map((r) => ({ revision: r.revision, reason: r.reason, reopenedBy: r.reopenedByName, reopenedAt: r.reopenedAt.toISOString() })),
   };
 }
 
-const snapshotOf = (r: ResultsView): Snapshot => ({ balls: r.balls.map((b) => ({ sampleId: b.sampleId, serial: b.serial, mean: b.mean, status: b.status })), decision: { decision: r.decision.decision } });
+const snapshotOf = (r: ResultsView): Snapshot => ({
+  balls: r.balls.map((b) => ({ sampleId: b.sampleId, serial: b.serial, mean: b.mean, status: b.status })),
+  decision: { decision: r.decision.decision },
+});
 
 export async function signOff(actor: Actor, submissionId: string, input: SignInput): Promise<SignOffView> {
   assertLead(actor, "sign off results");
@@ -64,14 +73,24 @@ export async function signOff(actor: Actor, submissionId: string, input: SignInp
     if (lockReason(state)) throw new AppError("conflict", `Submission ${s.reference} is already signed off (revision ${revision}).`);
     // Only the runs that count: a replaced or voided run's unread drops do not hold the sign-off up.
     const unsettled = results.balls.flatMap((b) => b.drops).filter((d) => !d.settled).length;
-    if (unsettled > 0) throw new AppError("conflict", `${unsettled} drop${unsettled === 1 ? " is" : "s are"} not settled yet (unread, read once or in discrepancy); settle every drop before signing off.`);
+    if (unsettled > 0)
+      throw new AppError(
+        "conflict",
+        `${unsettled} drop${unsettled === 1 ? " is" : "s are"} not settled yet (unread, read once or in discrepancy); settle every drop before signing off.`,
+      );
     const previous = signed.at(-1);
     const changes = previous ? diffResults(previous.results as Snapshot, snapshotOf(results)) : null;
     const id = await insertSignature(trx, { submissionId, revision, signedBy: actor.id, results, changes });
     // The snapshot keeps the whole results view; the diff reads only what it needs from it.
     await updateSubmissionRow(trx, submissionId, { status: "released" });
     await setDropStates(trx, submissionId, SIGNABLE_STATES, "signed off");
-    await recordChange(trx, actor, { action: "submission.signed_off", entity: "submission", entityId: submissionId, before: { status: s.status }, after: { status: "released", revision, signatureId: id, meaning: "results reviewed and released", changes } });
+    await recordChange(trx, actor, {
+      action: "submission.signed_off",
+      entity: "submission",
+      entityId: submissionId,
+      before: { status: s.status },
+      after: { status: "released", revision, signatureId: id, meaning: "results reviewed and released", changes },
+    });
     await notifyResultsReleased(trx, submissionId, revision);
   });
   return getSignOff(actor, submissionId);
@@ -89,7 +108,13 @@ export async function reopen(actor: Actor, submissionId: string, input: ReopenIn
     await insertReopening(trx, { submissionId, revision: next, reason: input.reason, reopenedBy: actor.id });
     await updateSubmissionRow(trx, submissionId, { status: "testing" });
     await restoreDropStates(trx, submissionId);
-    await recordChange(trx, actor, { action: "submission.reopened", entity: "submission", entityId: submissionId, before: { status: s.status, revision }, after: { status: "testing", revision: next, reason: input.reason } });
+    await recordChange(trx, actor, {
+      action: "submission.reopened",
+      entity: "submission",
+      entityId: submissionId,
+      before: { status: s.status, revision },
+      after: { status: "testing", revision: next, reason: input.reason },
+    });
   });
   return getSignOff(actor, submissionId);
 }

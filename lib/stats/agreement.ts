@@ -53,11 +53,7 @@ export function intraclass(ratings: readonly (readonly number[])[]): { single: I
  * Limits of agreement bias ± multiplier·s of the differences a − b.
  * Bland & Altman (1986), Lancet 1(8476):307–310.
  */
-export function blandAltman(
-  a: readonly number[],
-  b: readonly number[],
-  multiplier = 1.96,
-): { bias: number; sd: number; lower: number; upper: number } {
+export function blandAltman(a: readonly number[], b: readonly number[], multiplier = 1.96): { bias: number; sd: number; lower: number; upper: number } {
   checkValues(a, 2, "Limits of agreement");
   checkValues(b, 2, "Limits of agreement");
   if (a.length !== b.length) throw new Error("Limits of agreement need the same number of readings from both methods");

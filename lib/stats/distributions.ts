@@ -9,8 +9,8 @@ const MAX_ITERATIONS = 10_000;
 
 // Lanczos approximation, g = 7, nine coefficients (Godfrey), relative error about 1e-15.
 const LANCZOS = [
-  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905,
-  -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
+  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905, -0.13857109526572012,
+  9.9843695780195716e-6, 1.5056327351493116e-7,
 ];
 
 /** ln Γ(x) for x > 0. */
@@ -271,7 +271,12 @@ function poissonBetaSeries(x: number, b: number, del: number): number {
 
   // Forward: j = m + 1, m + 2, … Beyond the mode the weights fall by at least λ/(j + 1) < 1 a step and
   // the beta terms are at most 1, so once a term is below 1e-16 of the sum the rest is smaller still.
-  let p = p0, q = q0, iOdd = iOdd0, iEven = iEven0, gOdd = gOdd0, gEven = gEven0;
+  let p = p0,
+    q = q0,
+    iOdd = iOdd0,
+    iEven = iEven0,
+    gOdd = gOdd0,
+    gEven = gEven0;
   for (let j = m + 1; j <= m + MAX_ITERATIONS; j++) {
     iOdd -= gOdd;
     iEven -= gEven;
@@ -286,7 +291,12 @@ function poissonBetaSeries(x: number, b: number, del: number): number {
   }
 
   // Backward: j = m − 1, …, 0, with I_x(a − 1, b) = I_x(a, b) + g(a − 1).
-  p = p0; q = q0; iOdd = iOdd0; iEven = iEven0; gOdd = gOdd0; gEven = gEven0;
+  p = p0;
+  q = q0;
+  iOdd = iOdd0;
+  iEven = iEven0;
+  gOdd = gOdd0;
+  gEven = gEven0;
   for (let j = m - 1; j >= 0; j--) {
     // A term that underflowed to 0 (x tiny) is computed afresh, never as 0 × ∞.
     gOdd = gOdd > 0 ? (gOdd * (j + 1.5)) / (x * (j + 0.5 + b)) : g(j + 0.5);

@@ -48,7 +48,9 @@ export function timecodeToFrame(tc: string, rate: FrameRate): number {
   if (min > 59 || s > 59) throw new Error(`"${tc}" has minutes or seconds over 59.`);
   if (ff >= base) throw new Error(`"${tc}" has frame ${ff}, but a second has only ${base} frames (00–${pad(base - 1)}).`);
   if (drop && s === 0 && ff < drop && min % 10 !== 0) {
-    throw new Error(`"${tc}" does not exist in drop-frame timecode: frames 00${drop > 1 ? `–${pad(drop - 1)}` : ""} are skipped at the start of each minute not divisible by ten.`);
+    throw new Error(
+      `"${tc}" does not exist in drop-frame timecode: frames 00${drop > 1 ? `–${pad(drop - 1)}` : ""} are skipped at the start of each minute not divisible by ten.`,
+    );
   }
   const totalMinutes = h * 60 + min;
   return (totalMinutes * 60 + s) * base + ff - drop * (totalMinutes - Math.floor(totalMinutes / 10));

@@ -35,11 +35,7 @@ export function natrellaFactor(n: number, coverage: number, confidence: number):
 }
 
 /** Lower tolerance limit mean − k·s, with s the sample standard deviation and k exact. */
-export function lowerToleranceLimit(
-  values: readonly number[],
-  coverage: number,
-  confidence: number,
-): { mean: number; sd: number; k: number; limit: number } {
+export function lowerToleranceLimit(values: readonly number[], coverage: number, confidence: number): { mean: number; sd: number; k: number; limit: number } {
   checkValues(values, 2, "A tolerance limit");
   const { mean, sd } = meanAndSd(values);
   const k = toleranceFactor(values.length, coverage, confidence);

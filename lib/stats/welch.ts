@@ -32,7 +32,7 @@ export function welchInterval(
   const vb = (b.sd * b.sd) / b.n;
   const se = Math.sqrt(va + vb);
   if (!(se > 0)) throw new Error("A Welch interval needs values that are not all equal in both samples");
-  const df = (se ** 4) / ((va * va) / (a.n - 1) + (vb * vb) / (b.n - 1));
+  const df = se ** 4 / ((va * va) / (a.n - 1) + (vb * vb) / (b.n - 1));
   const difference = a.mean - b.mean;
   const t = studentTQuantile((1 + confidence) / 2, df);
   return { difference, se, df, t, lower: difference - t * se, upper: difference + t * se };

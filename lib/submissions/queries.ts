@@ -120,7 +120,11 @@ export async function insertSubmission(q: Db, v: SubmissionValues & { reference:
   return row.id;
 }
 
-export async function updateSubmissionRow(q: Db, id: string, patch: { modelName?: string; weightClassesLb?: number[]; notes?: string; status?: SubmissionStatus }): Promise<void> {
+export async function updateSubmissionRow(
+  q: Db,
+  id: string,
+  patch: { modelName?: string; weightClassesLb?: number[]; notes?: string; status?: SubmissionStatus },
+): Promise<void> {
   const row: Record<string, unknown> = { updated_at: q.fn.now() };
   if (patch.modelName !== undefined) row.model_name = patch.modelName;
   if (patch.weightClassesLb !== undefined) row.weight_classes_lb = patch.weightClassesLb;

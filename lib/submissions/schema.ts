@@ -16,7 +16,11 @@ export const STATUS_LABELS: Record<SubmissionStatus, string> = {
 };
 
 const weightClasses = z
-  .array(num("Weight class").pipe(z.number().int("Weight classes are whole pounds.").min(6, "Weight classes run from 6 to 16 lb.").max(16, "Weight classes run from 6 to 16 lb.")))
+  .array(
+    num("Weight class").pipe(
+      z.number().int("Weight classes are whole pounds.").min(6, "Weight classes run from 6 to 16 lb.").max(16, "Weight classes run from 6 to 16 lb."),
+    ),
+  )
   .max(11)
   .default([])
   .transform((v) => [...new Set(v)].sort((a, b) => a - b));
@@ -40,7 +44,9 @@ export type SubmissionValues = z.output<typeof submissionInputSchema>;
 
 export const submissionUpdateSchema = z
   .object({
-    modelName: text("Model name", 120).refine((v) => !/[<>]/.test(v), "Model name cannot contain < or >.").optional(),
+    modelName: text("Model name", 120)
+      .refine((v) => !/[<>]/.test(v), "Model name cannot contain < or >.")
+      .optional(),
     weightClassesLb: weightClasses.optional(),
     notes: optionalText("Notes").optional(),
   })

@@ -12,7 +12,15 @@ import { listSamples } from "../samples/queries";
 import { toSampleView } from "../samples/view";
 import { isStaff } from "../users/rules";
 import { assertCanEditIntake, assertVisible } from "./policy";
-import { findSubmission, insertSubmission, listSubmissions as selectSubmissions, lockSubmission, nextReference, updateSubmissionRow, type SubmissionRow } from "./queries";
+import {
+  findSubmission,
+  insertSubmission,
+  listSubmissions as selectSubmissions,
+  lockSubmission,
+  nextReference,
+  updateSubmissionRow,
+  type SubmissionRow,
+} from "./queries";
 import type { SubmissionListQuery, SubmissionValues, submissionUpdateSchema } from "./schema";
 import { toManufacturerView, toSubmissionView, type ManufacturerSubmissionView, type StaffSubmissionDetail, type SubmissionView } from "./view";
 import type { z } from "zod";
@@ -28,12 +36,16 @@ export async function visibleSubmission(actor: Actor, id: string, q = db()): Pro
 export async function createSubmission(actor: Actor, v: SubmissionValues): Promise<SubmissionView> {
   assertCanEditIntake(actor);
   return db().transaction(async (trx) => {
-    if (!(await findOrganisation(trx, v.organisationId))) throw new AppError("validation", "That organisation does not exist.", { fields: { organisationId: "Choose an organisation from the list." } });
+    if (!(await findOrganisation(trx, v.organisationId)))
+      throw new AppError("validation", "That organisation does not exist.", { fields: { organisationId: "Choose an organisation from the list." } });
     if (v.receivedOn > new Date(Date.now() + 86_400_000).toISOString().slice(0, 10)) {
       throw new AppError("validation", "The received date is in the future.", { fields: { receivedOn: "The received date cannot be in the future." } });
     }
     const edition = await findEditionInForce(trx, v.receivedOn);
-    if (!edition) throw new AppError("validation", `No specification edition is in force on ${v.receivedOn}. A lead must create one first.`, { fields: { receivedOn: "No edition is in force on this date." } });
+    if (!edition)
+      throw new AppError("validation", `No specification edition is in force on ${v.receivedOn}. A lead must create one first.`, {
+        fields: { receivedOn: "No edition is in force on this date." },
+      });
     if (v.kind === "surveillance") await checkApprovalLink(trx, v);
     const reference = await nextReference(trx, Number(v.receivedOn.slice(0, 4)));
     const id = await insertSubmission(trx, { ...v, reference, editionId: edition.id, createdBy: actor.id });
@@ -47,17 +59,24 @@ async function checkApprovalLink(trx: Parameters<typeof findSubmission>[0], v: S
   const approval = await findSubmission(trx, v.approvalSubmissionId!);
   const field = { approvalSubmissionId: "Choose an approval submission of the same organisation." };
   if (approval?.kind !== "approval") throw new AppError("validation", "The linked submission must be an approval submission.", { fields: field });
-  if (approval.organisationId !== v.organisationId) throw new AppError("validation", "The linked approval submission belongs to another organisation.", { fields: field });
+  if (approval.organisationId !== v.organisationId)
+    throw new AppError("validation", "The linked approval submission belongs to another organisation.", { fields: field });
 }
 
 /** A page of submissions; for staff each row counts its runs with unaccepted condition warnings. */
-export async function listSubmissions(actor: Actor, f: SubmissionListQuery): Promise<{ rows: (SubmissionView & { flaggedRuns: number })[]; total: number; page: number; pageSize: number }> {
+export async function listSubmissions(
+  actor: Actor,
+  f: SubmissionListQuery,
+): Promise<{ rows: (SubmissionView & { flaggedRuns: number })[]; total: number; page: number; pageSize: number }> {
   // A manufacturer's list is its own organisation's, whatever filter it sends.
   const scope = isStaff(actor) ? {} : { organisationId: actor.organisationId ?? "00000000-0000-0000-0000-000000000000" };
   const { rows, total } = await selectSubmissions(db(), f, scope);
   const flagged = new Map<string, number>();
   if (isStaff(actor)) {
-    for (const r of await findRunConditions(db(), rows.map((x) => x.id))) {
+    for (const r of await findRunConditions(
+      db(),
+      rows.map((x) => x.id),
+    )) {
       if (!r.accepted && conditionFlags(r.limits, r.input).length > 0) flagged.set(r.submissionId, (flagged.get(r.submissionId) ?? 0) + 1);
     }
   }

@@ -43,7 +43,17 @@ export function toManufacturerView(s: SubmissionRow, samples: { round: number }[
 export interface StaffSubmissionDetail {
   view: "staff";
   submission: SubmissionView;
-  edition: { id: string; name: string; dropsPerBall: number; minAbsorptionS: number; belowMinimumRule: BelowMinimumRule; minAcclimationH: number; surfaceTempMinC: number; surfaceTempMaxC: number; roughnessMaxSdUm: number };
+  edition: {
+    id: string;
+    name: string;
+    dropsPerBall: number;
+    minAbsorptionS: number;
+    belowMinimumRule: BelowMinimumRule;
+    minAcclimationH: number;
+    surfaceTempMinC: number;
+    surfaceTempMaxC: number;
+    roughnessMaxSdUm: number;
+  };
   rounds: { round: number; samples: (SampleView & { runs: RunView[] })[] }[];
   flaggedRuns: number;
   /** The revision in force and whether a lead has signed it off (which locks the submission). */

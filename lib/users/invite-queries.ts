@@ -9,9 +9,7 @@ export interface InviteRow {
 }
 
 export async function insertInvite(q: Db, i: { userId: string; tokenHash: string; createdBy: string; expiresAt: Date }): Promise<string> {
-  const [row] = await q("invites")
-    .insert({ user_id: i.userId, token_hash: i.tokenHash, created_by: i.createdBy, expires_at: i.expiresAt })
-    .returning("id");
+  const [row] = await q("invites").insert({ user_id: i.userId, token_hash: i.tokenHash, created_by: i.createdBy, expires_at: i.expiresAt }).returning("id");
   return row.id as string;
 }
 

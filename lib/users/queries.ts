@@ -1,4 +1,3 @@
-
 import { isUniqueViolation, type Db } from "../db";
 import { AppError } from "../errors";
 import type { Role } from "./rules";
@@ -73,16 +72,13 @@ export async function insertUser(
       .returning("id");
     return row.id as string;
   } catch (err) {
-    if (isUniqueViolation(err)) throw new AppError("conflict", `A user with the e-mail ${u.email} already exists.`, { fields: { email: "This e-mail is already in use." } });
+    if (isUniqueViolation(err))
+      throw new AppError("conflict", `A user with the e-mail ${u.email} already exists.`, { fields: { email: "This e-mail is already in use." } });
     throw err;
   }
 }
 
-export async function updateUserRow(
-  q: Db,
-  id: string,
-  patch: { name?: string; roles?: Role[]; active?: boolean; passwordHash?: string },
-): Promise<void> {
+export async function updateUserRow(q: Db, id: string, patch: { name?: string; roles?: Role[]; active?: boolean; passwordHash?: string }): Promise<void> {
   const row: Record<string, unknown> = { updated_at: q.fn.now() };
   if (patch.name !== undefined) row.name = patch.name;
   if (patch.roles !== undefined) row.roles = patch.roles;

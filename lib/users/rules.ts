@@ -45,11 +45,7 @@ export function statusOf(user: { active: boolean; hasPassword: boolean }): UserS
 }
 
 /** A lead may not lock the lab out by removing their own lead role or deactivating themselves. */
-export function selfChangeProblem(
-  actorId: string,
-  targetId: string,
-  change: { roles?: readonly Role[]; active?: boolean },
-): string | null {
+export function selfChangeProblem(actorId: string, targetId: string, change: { roles?: readonly Role[]; active?: boolean }): string | null {
   if (actorId !== targetId) return null;
   if (change.active === false) return "You cannot deactivate your own account; ask another lead.";
   if (change.roles && !change.roles.includes("lead")) return "You cannot remove your own lead role; ask another lead.";

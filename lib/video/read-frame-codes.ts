@@ -10,13 +10,24 @@ import { decodeFrameCode, FRAME_CODE_BITS, frameCodeReadFilter, unwrapFrameCodes
 export async function readFrameCodes(file: string, opts?: { width: number; height: number }): Promise<number[]> {
   const size = opts ?? (await probeVideoSize(file));
   const args = [
-    "-hide_banner", "-nostdin", "-v", "error",
-    "-i", file,
-    "-map", "0:v:0",
-    "-vf", frameCodeReadFilter(size.width, size.height),
+    "-hide_banner",
+    "-nostdin",
+    "-v",
+    "error",
+    "-i",
+    file,
+    "-map",
+    "0:v:0",
+    "-vf",
+    frameCodeReadFilter(size.width, size.height),
     // passthrough: one output frame per decoded frame, never a duplicate or a drop to fit a rate.
-    "-fps_mode", "passthrough",
-    "-f", "rawvideo", "-pix_fmt", "gray", "pipe:1",
+    "-fps_mode",
+    "passthrough",
+    "-f",
+    "rawvideo",
+    "-pix_fmt",
+    "gray",
+    "pipe:1",
   ];
   return new Promise((resolve, reject) => {
     const child = spawn("ffmpeg", args, { stdio: ["ignore", "pipe", "pipe"] });

@@ -21,23 +21,89 @@ async function ok<T = any>(res: Response, what: string): Promise<T> {
 const today = () => new Date().toISOString().slice(0, 10);
 
 async function placedDrops(lead: Client, count: number, log: (s: string) => void): Promise<string[]> {
-  await ok(await lead.post("/api/editions", {
-    name: `Bench edition ${randomBytes(3).toString("hex")}`, effectiveFrom: today(), minAbsorptionS: 135, criterion: "ball_mean", dropsPerBall: 10,
-    guardBandS: 10, roundSizes: [2, 8, 24], toleranceCoverage: 0.9, toleranceConfidence: 0.95, readingToleranceS: 0.5,
-    minAcclimationH: 24, surfaceTempMinC: 20, surfaceTempMaxC: 24, roughnessMaxSdUm: 0.1, sources: {},
-  }), "edition");
+  await ok(
+    await lead.post("/api/editions", {
+      name: `Bench edition ${randomBytes(3).toString("hex")}`,
+      effectiveFrom: today(),
+      minAbsorptionS: 135,
+      criterion: "ball_mean",
+      dropsPerBall: 10,
+      guardBandS: 10,
+      roundSizes: [2, 8, 24],
+      toleranceCoverage: 0.9,
+      toleranceConfidence: 0.95,
+      readingToleranceS: 0.5,
+      minAcclimationH: 24,
+      surfaceTempMinC: 20,
+      surfaceTempMaxC: 24,
+      roughnessMaxSdUm: 0.1,
+      sources: {},
+    }),
+    "edition",
+  );
   const org = (await ok(await lead.get("/api/organisations"), "organisations")).organisations[0].id;
   const file = path.join(projectRoot, ".data", "bench-api", "clip.mp4");
-  execFileSync("ffmpeg", ["-v", "error", "-y", "-f", "lavfi", "-i", "testsrc2=size=320x180:rate=25:duration=2", "-c:v", "libx264", "-preset", "ultrafast", "-bf", "0", "-g", "12", "-pix_fmt", "yuv420p", file]);
+  execFileSync("ffmpeg", [
+    "-v",
+    "error",
+    "-y",
+    "-f",
+    "lavfi",
+    "-i",
+    "testsrc2=size=320x180:rate=25:duration=2",
+    "-c:v",
+    "libx264",
+    "-preset",
+    "ultrafast",
+    "-bf",
+    "0",
+    "-g",
+    "12",
+    "-pix_fmt",
+    "yuv420p",
+    file,
+  ]);
   const leadId = (await ok(await lead.get("/api/me"), "me")).id;
   const drops: string[] = [];
   while (drops.length < count) {
-    const s = (await ok(await lead.post("/api/submissions", { organisationId: org, modelName: `Bench model ${drops.length}`, kind: "approval", weightClassesLb: [15], receivedOn: today() }), "submission")).submission;
+    const s = (
+      await ok(
+        await lead.post("/api/submissions", {
+          organisationId: org,
+          modelName: `Bench model ${drops.length}`,
+          kind: "approval",
+          weightClassesLb: [15],
+          receivedOn: today(),
+        }),
+        "submission",
+      )
+    ).submission;
     const now = Date.now();
-    const sample = (await ok(await lead.post(`/api/submissions/${s.id}/samples`, { serial: `B-${drops.length}`, weight: { value: 15, unit: "lb" }, receivedAt: new Date(now - 48 * 3600_000).toISOString(), acclimationStartedAt: new Date(now - 30 * 3600_000).toISOString() }), "sample")).sample;
-    const run = (await ok(await lead.post(`/api/samples/${sample.id}/runs`, {
-      testedAt: new Date(now).toISOString(), roomTemp: { value: 22, unit: "C" }, surfaceTemp: { value: 22, unit: "C" }, prepMethod: "Wipe", roughnessRaUm: [0.4], oilLot: "L1", dispenserCheck: { value: 12, unit: "mg" },
-    }), "run")).run;
+    const sample = (
+      await ok(
+        await lead.post(`/api/submissions/${s.id}/samples`, {
+          serial: `B-${drops.length}`,
+          weight: { value: 15, unit: "lb" },
+          receivedAt: new Date(now - 48 * 3600_000).toISOString(),
+          acclimationStartedAt: new Date(now - 30 * 3600_000).toISOString(),
+        }),
+        "sample",
+      )
+    ).sample;
+    const run = (
+      await ok(
+        await lead.post(`/api/samples/${sample.id}/runs`, {
+          testedAt: new Date(now).toISOString(),
+          roomTemp: { value: 22, unit: "C" },
+          surfaceTemp: { value: 22, unit: "C" },
+          prepMethod: "Wipe",
+          roughnessRaUm: [0.4],
+          oilLot: "L1",
+          dispenserCheck: { value: 12, unit: "mg" },
+        }),
+        "run",
+      )
+    ).run;
     const clipId = await ingestClipFile(db(), run.id, file, leadId);
     if ((await clipSettled(db(), clipId, 300)) !== "ready") throw new Error("the bench clip was not made ready");
     for (const d of (await ok(await lead.get(`/api/runs/${run.id}/drops`), "drops")).drops) {

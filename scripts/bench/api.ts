@@ -44,16 +44,37 @@ export async function benchApi(o: { connections: number; perConnection: number; 
     const baseline: number[][] = [];
     for (let round = 0; round < o.rounds; round++) {
       const phases = [
-        async () => baseline.push(await closedLoop(readers.map((r) => r.baselineStep), o.perConnection)),
-        async () => submit.push(await closedLoop(readers.map((r) => r.submitStep), o.perConnection)),
+        async () =>
+          baseline.push(
+            await closedLoop(
+              readers.map((r) => r.baselineStep),
+              o.perConnection,
+            ),
+          ),
+        async () =>
+          submit.push(
+            await closedLoop(
+              readers.map((r) => r.submitStep),
+              o.perConnection,
+            ),
+          ),
       ];
       if (round % 2) phases.reverse();
       for (const p of phases) await p();
-      log(`round ${round + 1}: submit p95 ${latencySummary(submit.at(-1)!).p95.toFixed(1)} ms, baseline p95 ${latencySummary(baseline.at(-1)!).p95.toFixed(1)} ms`);
+      log(
+        `round ${round + 1}: submit p95 ${latencySummary(submit.at(-1)!).p95.toFixed(1)} ms, baseline p95 ${latencySummary(baseline.at(-1)!).p95.toFixed(1)} ms`,
+      );
     }
     const roundRatios = submit.map((xs, i) => latencySummary(xs).p95 / latencySummary(baseline[i]).p95);
     const ratioP95 = [...roundRatios].sort((x, y) => x - y)[Math.floor(roundRatios.length / 2)];
-    return { connections: o.connections, perPhase: o.connections * o.perConnection, submit: latencySummary(submit.flat()), baseline: latencySummary(baseline.flat()), ratioP95, roundRatios };
+    return {
+      connections: o.connections,
+      perPhase: o.connections * o.perConnection,
+      submit: latencySummary(submit.flat()),
+      baseline: latencySummary(baseline.flat()),
+      ratioP95,
+      roundRatios,
+    };
   } finally {
     // This process queued the clips' jobs and held connections: let go before the database stops.
     const [{ stopBoss }, { closeDb }] = await Promise.all([import("../../lib/jobs"), import("../../lib/db")]);

@@ -25,12 +25,22 @@ async function main() {
   if (only === "all" || only === "worker") await benchWorker();
   // Imported when used: the player brings tests/helpers/app, whose APP_URL is read once, at import,
   // and must already be the bench stack's (set above).
-  if (only === "all" || only === "player") await (await import("./player")).benchPlayer({ seconds: Number(arg("player-seconds", "25")), width: 1920, height: 1080, gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined });
+  if (only === "all" || only === "player")
+    await (await import("./player")).benchPlayer({
+      seconds: Number(arg("player-seconds", "25")),
+      width: 1920,
+      height: 1080,
+      gop: process.argv.includes("--player-gop") ? Number(arg("player-gop", "15")) : undefined,
+    });
   if (only === "all" || only === "api") await reportApi();
 }
 
 async function reportApi() {
-  const r = await benchApi({ connections: Number(arg("connections", "50")), perConnection: Number(arg("per-connection", "10")), rounds: Number(arg("api-rounds", "4")) });
+  const r = await benchApi({
+    connections: Number(arg("connections", "50")),
+    perConnection: Number(arg("per-connection", "10")),
+    rounds: Number(arg("api-rounds", "4")),
+  });
   const ms = (v: number) => `${v.toFixed(1)} ms`;
   console.log(`\nreading-submit API, ${r.connections} connections, ${r.perPhase} timed requests per phase and round:`);
   console.log(`  submit:   median ${ms(r.submit.median)}, p95 ${ms(r.submit.p95)} (n = ${r.submit.n})`);
@@ -66,12 +76,29 @@ async function benchWorker() {
 
   const loader = path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs");
   const ours = (step: "index" | "proxy") => {
-    const r = spawnSync(process.execPath, ["--import", loader, path.join(projectRoot, "scripts", "bench", "steps.ts"), step, clip, path.join(dir, "proxy-ours.mp4")], { encoding: "utf8", maxBuffer: 1 << 24 });
+    const r = spawnSync(
+      process.execPath,
+      ["--import", loader, path.join(projectRoot, "scripts", "bench", "steps.ts"), step, clip, path.join(dir, "proxy-ours.mp4")],
+      { encoding: "utf8", maxBuffer: 1 << 24 },
+    );
     if (r.status !== 0) throw new Error(`the worker step failed: ${r.stderr}`);
-    return JSON.parse(r.stdout.trim().split("\n").pop()!) as { indexMs: number; proxyMs: number | null; frames: number; storedBytes: number; gop: number; timescale: number; peakRssMb: number };
+    return JSON.parse(r.stdout.trim().split("\n").pop()!) as {
+      indexMs: number;
+      proxyMs: number | null;
+      frames: number;
+      storedBytes: number;
+      gop: number;
+      timescale: number;
+      peakRssMb: number;
+    };
   };
   const bareIndexRun = () =>
-    seconds(() => execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags", "-of", "csv=p=0", clip], { maxBuffer: 1 << 30, stdio: ["ignore", "ignore", "inherit"] }));
+    seconds(() =>
+      execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts,dts,flags", "-of", "csv=p=0", clip], {
+        maxBuffer: 1 << 30,
+        stdio: ["ignore", "ignore", "inherit"],
+      }),
+    );
   // Rounds alternate which side goes first, so a neighbour's load falls on both sides alike.
   const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
   const oursIndex: number[] = [];
@@ -111,7 +138,9 @@ async function benchWorker() {
 
   const row = (what: string, ours: number, bare: number, goal: number) =>
     `${what.padEnd(14)} ours ${ours.toFixed(2).padStart(8)} s   bare ${bare.toFixed(2).padStart(8)} s   ratio ${(ours / bare).toFixed(2)}×   goal ≤ ${goal}× ${ours / bare <= goal ? "met" : "NOT met"}`;
-  console.log(`\n${minutes}-minute ${width}×${height} clip, ${r.frames} frames, index stored in ${(r.storedBytes / 1024).toFixed(0)} kB; medians of ${oursIndex.length} index and ${oursProxy.length} proxy rounds`);
+  console.log(
+    `\n${minutes}-minute ${width}×${height} clip, ${r.frames} frames, index stored in ${(r.storedBytes / 1024).toFixed(0)} kB; medians of ${oursIndex.length} index and ${oursProxy.length} proxy rounds`,
+  );
   console.log(row("frame index", median(oursIndex), median(bareIndexTimes), 1.2));
   if (oursProxy.length) console.log(row("proxy", median(oursProxy), median(bareProxyTimes), 1.1));
   console.log(`worker peak memory ${peak.toFixed(0)} MB   goal ≤ 300 MB ${peak <= 300 ? "met" : "NOT met"}`);

@@ -29,4 +29,6 @@ function Page({ frames, offsetPts }: { frames: PlayerFrames; offsetPts: number }
 
 void fetch("/index.json")
   .then((r) => r.json())
-  .then((ix: { frames: PlayerFrames; offsetPts: number }) => createRoot(document.getElementById("root")!).render(<Page frames={ix.frames} offsetPts={ix.offsetPts} />));
+  .then((ix: { frames: PlayerFrames; offsetPts: number }) =>
+    createRoot(document.getElementById("root")!).render(<Page frames={ix.frames} offsetPts={ix.offsetPts} />),
+  );

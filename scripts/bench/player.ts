@@ -25,7 +25,12 @@ function serve(files: Record<string, { file: string; type: string }>): Promise<h
     const m = /^bytes=(\d+)-(\d*)$/.exec(req.headers.range ?? "");
     const start = m ? Number(m[1]) : 0;
     const end = m?.[2] ? Math.min(size - 1, Number(m[2])) : size - 1;
-    res.writeHead(m ? 206 : 200, { "Content-Type": f.type, "Content-Length": end - start + 1, "Accept-Ranges": "bytes", ...(m ? { "Content-Range": `bytes ${start}-${end}/${size}` } : {}) });
+    res.writeHead(m ? 206 : 200, {
+      "Content-Type": f.type,
+      "Content-Length": end - start + 1,
+      "Accept-Ranges": "bytes",
+      ...(m ? { "Content-Range": `bytes ${start}-${end}/${size}` } : {}),
+    });
     createReadStream(f.file, { start, end }).pipe(res);
   });
   return new Promise((resolve) => server.listen(0, "127.0.0.1", () => resolve(server)));
@@ -51,7 +56,10 @@ export async function benchPlayer(opts: { seconds: number; width: number; height
   const gop = opts.gop ?? proxyGop(summary.averageRate);
   const proxy = clip.replace(/\.mp4$/, `-proxy-gop${gop}.mp4`);
   if (!existsSync(proxy)) await buildProxy(clip, proxy, { timescale: packets.timeBase.den, gop });
-  writeFileSync(path.join(dir, "index.json"), JSON.stringify({ frames: { pts, timeBase: packets.timeBase, nominalRate: "30", keyframes: packets.keyframes }, offsetPts: pts[0] }));
+  writeFileSync(
+    path.join(dir, "index.json"),
+    JSON.stringify({ frames: { pts, timeBase: packets.timeBase, nominalRate: "30", keyframes: packets.keyframes }, offsetPts: pts[0] }),
+  );
   await build({
     entryPoints: [path.join(projectRoot, "scripts", "bench", "player-page.tsx")],
     bundle: true,
@@ -62,7 +70,10 @@ export async function benchPlayer(opts: { seconds: number; width: number; height
     define: { "process.env.NODE_ENV": '"production"' },
     logLevel: "error",
   });
-  writeFileSync(path.join(dir, "index.html"), `<!doctype html><meta charset="utf-8"><link rel="stylesheet" href="/app.css"><div id="root" style="width:1200px"></div><script src="/app.js"></script>`);
+  writeFileSync(
+    path.join(dir, "index.html"),
+    `<!doctype html><meta charset="utf-8"><link rel="stylesheet" href="/app.css"><div id="root" style="width:1200px"></div><script src="/app.js"></script>`,
+  );
   const server = await serve({
     "/": { file: path.join(dir, "index.html"), type: "text/html" },
     "/app.js": { file: path.join(dir, "app.js"), type: "text/javascript" },
@@ -76,13 +87,18 @@ export async function benchPlayer(opts: { seconds: number; width: number; height
     // tsx keeps function names with a helper the page does not have; measureInPage is sent as text.
     await page.addInitScript("window.__name = (f) => f");
     await page.goto(`http://127.0.0.1:${(server.address() as AddressInfo).port}/`);
-    await page.waitForFunction(() => document.querySelector('[data-testid="frame-player"]')?.getAttribute("data-status") === "confirmed", null, { timeout: 60_000 });
+    await page.waitForFunction(() => document.querySelector('[data-testid="frame-player"]')?.getAttribute("data-status") === "confirmed", null, {
+      timeout: 60_000,
+    });
     const times = pts.map((p) => ((p - pts[0]) * packets.timeBase.num) / packets.timeBase.den);
     const r = await page.evaluate(measureInPage, { steps: STEPS, seeks: SEEKS, times });
     const interval = 1000 / summary.averageRate;
     const ms = (x: number) => `${x.toFixed(1)} ms`;
-    const line = (what: string, xs: number[]) => `${what.padEnd(22)} median ${ms(quantile(xs, 0.5)).padStart(9)}   p95 ${ms(quantile(xs, 0.95)).padStart(9)}   (${xs.length})`;
-    console.log(`\nplayer: ${opts.width}×${opts.height} proxy, ${pts.length} frames at ${summary.averageRate.toFixed(2)} fps, keyframe every ${gop} frames; frame interval ${ms(interval)}`);
+    const line = (what: string, xs: number[]) =>
+      `${what.padEnd(22)} median ${ms(quantile(xs, 0.5)).padStart(9)}   p95 ${ms(quantile(xs, 0.95)).padStart(9)}   (${xs.length})`;
+    console.log(
+      `\nplayer: ${opts.width}×${opts.height} proxy, ${pts.length} frames at ${summary.averageRate.toFixed(2)} fps, keyframe every ${gop} frames; frame interval ${ms(interval)}`,
+    );
     console.log(line("one-frame step", [...r.forward, ...r.back]));
     console.log(line("  forward", r.forward));
     console.log(line("  back", r.back));
@@ -91,7 +107,9 @@ export async function benchPlayer(opts: { seconds: number; width: number; height
     console.log(line("bare <video> seek", r.bareSeeks));
     console.log(`frames not confirmed: ${r.unconfirmed}`);
     const med = quantile([...r.forward, ...r.back], 0.5);
-    console.log(`player ÷ bare element, medians: step ${(med / quantile(r.bareSteps, 0.5)).toFixed(2)}×, seek ${(quantile(r.seeks, 0.5) / quantile(r.bareSeeks, 0.5)).toFixed(2)}×`);
+    console.log(
+      `player ÷ bare element, medians: step ${(med / quantile(r.bareSteps, 0.5)).toFixed(2)}×, seek ${(quantile(r.seeks, 0.5) / quantile(r.bareSeeks, 0.5)).toFixed(2)}×`,
+    );
     console.log(`median step ≤ one frame interval (${ms(interval)}): ${med <= interval ? "met" : "NOT met"}`);
   } finally {
     await browser.close();

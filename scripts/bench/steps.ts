@@ -22,7 +22,17 @@ async function main() {
     proxyMs = performance.now() - t1;
   }
   // maxRSS is in kilobytes on Linux.
-  console.log(JSON.stringify({ indexMs, proxyMs, frames: summary.frameCount, storedBytes: stored.length, gop, timescale: packets.timeBase.den, peakRssMb: process.resourceUsage().maxRSS / 1024 }));
+  console.log(
+    JSON.stringify({
+      indexMs,
+      proxyMs,
+      frames: summary.frameCount,
+      storedBytes: stored.length,
+      gop,
+      timescale: packets.timeBase.den,
+      peakRssMb: process.resourceUsage().maxRSS / 1024,
+    }),
+  );
 }
 
 main().catch((err) => {

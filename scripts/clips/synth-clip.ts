@@ -68,7 +68,9 @@ async function main(): Promise<number> {
   const { file, truthFile, truth } = await renderSyntheticClip(parsed);
   console.log(`${file}: ${truth.video.frameCount} frames in ${((Date.now() - t0) / 1000).toFixed(1)} s; truth in ${truthFile}`);
   for (const d of truth.drops) {
-    console.log(`  drop ${d.index}: frames ${d.dispenseFrame}→${d.clearFrame}, ${d.dispenseTime.toFixed(3)}→${d.clearTime.toFixed(3)} s (${d.trueDuration.toFixed(3)} s) at ${d.x},${d.y} r${d.radius}`);
+    console.log(
+      `  drop ${d.index}: frames ${d.dispenseFrame}→${d.clearFrame}, ${d.dispenseTime.toFixed(3)}→${d.clearTime.toFixed(3)} s (${d.trueDuration.toFixed(3)} s) at ${d.x},${d.y} r${d.radius}`,
+    );
   }
   return 0;
 }

@@ -51,7 +51,8 @@ function dropLayers(d: DropPlan, i: GraphInputs["drops"][number], margin: number
 /** Slow drift plus a faster tremor, never more than `margin` px from centre; crop snaps to even px. */
 function shake(margin: number, seed: number): string {
   const p = (k: number) => ((seed * 7 + k * 13) % 31) / 5;
-  const axis = (f1: number, f2: number, k: number) => `${margin}+${(0.65 * margin).toFixed(2)}*sin(2*PI*${f1}*t+${p(k)})+${(0.3 * margin).toFixed(2)}*sin(2*PI*${f2}*t+${p(k + 1)})`;
+  const axis = (f1: number, f2: number, k: number) =>
+    `${margin}+${(0.65 * margin).toFixed(2)}*sin(2*PI*${f1}*t+${p(k)})+${(0.3 * margin).toFixed(2)}*sin(2*PI*${f2}*t+${p(k + 1)})`;
   return `x='${axis(0.23, 1.7, 0)}':y='${axis(0.17, 2.3, 2)}'`;
 }
 
@@ -77,17 +78,31 @@ export function ffmpegArgs(o: SynthOptions, frames: FramePlan, drops: DropPlan[]
       ? ["-c:v", "libx264", "-preset", o.preset, "-crf", "23", "-bf", bf, "-g", gop, "-pix_fmt", "yuv420p"]
       : ["-c:v", "mpeg4", "-q:v", "3", "-bf", bf, "-g", gop, "-pix_fmt", "yuv420p"];
   return [
-    "-hide_banner", "-nostdin", "-v", "error", "-y",
+    "-hide_banner",
+    "-nostdin",
+    "-v",
+    "error",
+    "-y",
     ...input(inputs.surface),
     ...inputs.drops.flatMap((d) => [...input(d.body.file), ...input(d.glint.file)]),
-    "-filter_complex", filterGraph(o, frames, drops, inputs, margin),
-    "-map", "[out]",
-    "-fps_mode", "passthrough",
+    "-filter_complex",
+    filterGraph(o, frames, drops, inputs, margin),
+    "-map",
+    "[out]",
+    "-fps_mode",
+    "passthrough",
     ...codec,
-    "-colorspace", "bt709", "-color_primaries", "bt709", "-color_trc", "bt709",
+    "-colorspace",
+    "bt709",
+    "-color_primaries",
+    "bt709",
+    "-color_trc",
+    "bt709",
     ...(o.start > 0 ? ["-output_ts_offset", sec(o.start)] : []),
-    "-map_metadata", "-1",
-    "-f", FORMAT[o.container],
+    "-map_metadata",
+    "-1",
+    "-f",
+    FORMAT[o.container],
     o.out,
   ];
 }

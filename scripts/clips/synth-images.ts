@@ -5,7 +5,7 @@ import { BALL } from "./synth-plan";
 // seconds for one shaded 1080p frame, against well under one here). Pure: returns file contents
 // (PPM / PAM, which ffmpeg reads natively).
 
-const clamp255 = (v: number) => (v < 0 ? 0 : Math.min(v , 255));
+const clamp255 = (v: number) => (v < 0 ? 0 : Math.min(v, 255));
 
 /** Fixed per-pixel grain of the cover: static, so it moves with the ball when the camera shakes. */
 function grain(x: number, y: number, seed: number): number {

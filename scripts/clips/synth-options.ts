@@ -77,7 +77,8 @@ export function resolveOptions(partial: Partial<SynthOptions> & { out: string })
   const o: SynthOptions = { ...DEFAULTS, ...partial, container };
   parseRate(o.fps);
   if (!CONTAINERS.includes(o.container)) throw new Error(`--container must be one of ${CONTAINERS.join(", ")}`);
-  if (o.width % 2 || o.height % 2 || o.width < 160 || o.height < 90) throw new Error(`size ${o.width}x${o.height}: width and height must be even and at least 160x90`);
+  if (o.width % 2 || o.height % 2 || o.width < 160 || o.height < 90)
+    throw new Error(`size ${o.width}x${o.height}: width and height must be even and at least 160x90`);
   if (!(o.length > 0) || o.length > 4 * 3600) throw new Error(`--length must be between 0 and 14400 seconds`);
   if (!Number.isInteger(o.drops) || o.drops < 1 || o.drops > 12) throw new Error(`--drops must be a whole number from 1 to 12`);
   if (!Number.isInteger(o.seed)) throw new Error(`--seed must be a whole number`);

@@ -112,7 +112,10 @@ function placeDrops(o: Pick<SynthOptions, "width" | "height" | "drops">, rand: (
  * before and after it. Durations are spread (longest to ~55 % of it), shuffled by the seed, so
  * drops are told apart by duration as well as by place.
  */
-export function planDrops(o: Pick<SynthOptions, "width" | "height" | "drops" | "seed" | "length"> & { durations?: readonly number[] }, frames: FramePlan): DropPlan[] {
+export function planDrops(
+  o: Pick<SynthOptions, "width" | "height" | "drops" | "seed" | "length"> & { durations?: readonly number[] },
+  frames: FramePlan,
+): DropPlan[] {
   const rand = rng(o.seed);
   const spots = placeDrops(o, rand);
   const slot = o.length / o.drops;

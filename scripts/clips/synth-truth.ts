@@ -61,7 +61,8 @@ export function buildTruth(
 ): Truth {
   const { pts, timeBase: tb } = probe;
   if (pts.length !== frames.ticks.length) throw new Error(`${file} has ${pts.length} frames, ${frames.ticks.length} were rendered`);
-  for (let i = 1; i < pts.length; i++) if (pts[i] <= pts[i - 1]) throw new Error(`${file}: frame ${i} does not come after frame ${i - 1} (pts ${pts[i - 1]}, ${pts[i]})`);
+  for (let i = 1; i < pts.length; i++)
+    if (pts[i] <= pts[i - 1]) throw new Error(`${file}: frame ${i} does not come after frame ${i - 1} (pts ${pts[i - 1]}, ${pts[i]})`);
   const seconds = pts.map((p) => ticksToSeconds(p, tb));
   // The muxer shifts every frame alike (start offset, MPEG-TS delay, B-frame delay), so one
   // offset maps graph time to clip time; the drop times sit mid-interval, far from any rounding.
@@ -72,7 +73,9 @@ export function buildTruth(
     const dispenseFrame = firstAtOrAfter(seconds, dispenseTime);
     const clearFrame = firstAtOrAfter(seconds, clearTime);
     if (dispenseFrame !== d.dispenseFrame || clearFrame !== d.clearFrame) {
-      throw new Error(`${file}: drop ${d.index} was rendered on frames ${d.dispenseFrame}–${d.clearFrame} but the file's timestamps give ${dispenseFrame}–${clearFrame}`);
+      throw new Error(
+        `${file}: drop ${d.index} was rendered on frames ${d.dispenseFrame}–${d.clearFrame} but the file's timestamps give ${dispenseFrame}–${clearFrame}`,
+      );
     }
     return {
       index: d.index,

@@ -1,8 +1,6 @@
 import path from "node:path";
 import { pathToFileURL } from "node:url";
-import {
-  type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor,
-} from "./service";
+import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor } from "./service";
 
 export interface MailFakeOptions {
   smtpPort: number;
@@ -31,10 +29,14 @@ export async function startMailFake(o: MailFakeOptions): Promise<Service & { smt
   const stop = () => stopChild(child);
   const apiUrl = `http://127.0.0.1:${o.httpPort}`;
   try {
-    await waitFor(async () => {
-      assertAlive(child, "mail-fake", o.logFile);
-      return logHasSince(o.logFile, logStart, "mail-fake: smtp") && (await httpAnswers(`${apiUrl}/messages`));
-    }, 20_000, `mail fake on ${apiUrl} (log: ${o.logFile})`);
+    await waitFor(
+      async () => {
+        assertAlive(child, "mail-fake", o.logFile);
+        return logHasSince(o.logFile, logStart, "mail-fake: smtp") && (await httpAnswers(`${apiUrl}/messages`));
+      },
+      20_000,
+      `mail fake on ${apiUrl} (log: ${o.logFile})`,
+    );
   } catch (e) {
     await stop();
     throw e;

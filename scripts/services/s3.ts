@@ -1,9 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { HeadBucketCommand, S3Client } from "@aws-sdk/client-s3";
-import {
-  type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor,
-} from "./service";
+import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor } from "./service";
 
 export interface S3Options {
   dataDir: string;
@@ -50,9 +48,7 @@ export function corsXml(origins: string[]): string {
   return `<CORSConfiguration>\n  <CORSRule>\n    ${rule.join("\n    ")}\n  </CORSRule>\n</CORSConfiguration>\n`;
 }
 
-export async function startS3(
-  o: S3Options,
-): Promise<Service & { endpoint: string; accessKeyId: string; secretAccessKey: string }> {
+export async function startS3(o: S3Options): Promise<Service & { endpoint: string; accessKeyId: string; secretAccessKey: string }> {
   const dataDir = path.resolve(o.dataDir);
   fs.mkdirSync(dataDir, { recursive: true });
   // s3rver lists only folders as buckets, so the file can sit in its root.
@@ -61,9 +57,12 @@ export async function startS3(
 
   const args = [
     path.join(projectRoot, "node_modules", ".bin", "s3rver"),
-    "--directory", dataDir,
-    "--address", "127.0.0.1",
-    "--port", String(o.port),
+    "--directory",
+    dataDir,
+    "--address",
+    "127.0.0.1",
+    "--port",
+    String(o.port),
     // Otherwise any host name but localhost/IPs is taken as a bucket name.
     "--no-vhost-buckets",
     ...(o.verbose ? [] : ["--silent"]),
@@ -75,12 +74,16 @@ export async function startS3(
   const endpoint = `http://127.0.0.1:${o.port}`;
 
   try {
-    await waitFor(async () => {
-      assertAlive(child, "s3rver", o.logFile);
-      // The banner in our own part of the log proves that this child bound the
-      // port, not some other server that was already listening there.
-      return logHasSince(o.logFile, logStart, "S3rver listening on") && (await httpAnswers(endpoint));
-    }, 20_000, `s3rver on ${endpoint} (log: ${o.logFile})`);
+    await waitFor(
+      async () => {
+        assertAlive(child, "s3rver", o.logFile);
+        // The banner in our own part of the log proves that this child bound the
+        // port, not some other server that was already listening there.
+        return logHasSince(o.logFile, logStart, "S3rver listening on") && (await httpAnswers(endpoint));
+      },
+      20_000,
+      `s3rver on ${endpoint} (log: ${o.logFile})`,
+    );
     const client = localS3Client(endpoint);
     try {
       for (const bucket of o.buckets) await client.send(new HeadBucketCommand({ Bucket: bucket }));

@@ -43,15 +43,30 @@ async function main(): Promise<void> {
   const services: Service[] = [];
   try {
     const db = await timed(reuse ? "postgres restart" : "postgres initdb+start", () =>
-      startPostgres({ dataDir: pgDir, port: pgPort, user: "wickmark", password: "selfcheck-pw",
-        database: "wickmark_selfcheck", fast: true, logFile: path.join(logs, "postgres.log") }));
+      startPostgres({
+        dataDir: pgDir,
+        port: pgPort,
+        user: "wickmark",
+        password: "selfcheck-pw",
+        database: "wickmark_selfcheck",
+        fast: true,
+        logFile: path.join(logs, "postgres.log"),
+      }),
+    );
     services.push(db);
     const s3 = await timed("s3rver start", () =>
-      startS3({ dataDir: path.join(root, "s3"), port: s3Port, buckets: ["wickmark-media"],
-        corsOrigins: ["http://127.0.0.1:3000"], logFile: path.join(logs, "s3rver.log") }));
+      startS3({
+        dataDir: path.join(root, "s3"),
+        port: s3Port,
+        buckets: ["wickmark-media"],
+        corsOrigins: ["http://127.0.0.1:3000"],
+        logFile: path.join(logs, "s3rver.log"),
+      }),
+    );
     services.push(s3);
     const mail = await timed("mail fake start", () =>
-      startMailFake({ smtpPort, httpPort, storeFile: path.join(root, "mail.jsonl"), logFile: path.join(logs, "mail.log") }));
+      startMailFake({ smtpPort, httpPort, storeFile: path.join(root, "mail.jsonl"), logFile: path.join(logs, "mail.log") }),
+    );
     services.push(mail);
 
     const client = new pg.Client({ connectionString: db.url });
@@ -87,8 +102,13 @@ async function main(): Promise<void> {
     const subject = `Selfcheck ${Date.now()}`;
     const transport = nodemailer.createTransport(mail.smtpUrl);
     try {
-      await transport.sendMail({ from: "Wickmark <no-reply@wickmark.test>", to: "Lab.Tech@example.test",
-        subject, text: "plain body", html: "<p>html body</p>" });
+      await transport.sendMail({
+        from: "Wickmark <no-reply@wickmark.test>",
+        to: "Lab.Tech@example.test",
+        subject,
+        text: "plain body",
+        html: "<p>html body</p>",
+      });
     } finally {
       transport.close();
     }

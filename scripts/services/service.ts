@@ -29,11 +29,7 @@ const setprivBin = ["/usr/bin/setpriv", "/bin/setpriv"].find((p) => fs.existsSyn
  * still hits the real server) after dropping privileges and arming a
  * parent-death signal: even if this process is SIGKILLed, no server is orphaned.
  */
-export function wrapCommand(
-  cmd: string,
-  args: string[],
-  o: { runAs?: { uid: number; gid: number }; parentDeathSignal?: NodeJS.Signals },
-): [string, string[]] {
+export function wrapCommand(cmd: string, args: string[], o: { runAs?: { uid: number; gid: number }; parentDeathSignal?: NodeJS.Signals }): [string, string[]] {
   if (!setprivBin) {
     if (o.runAs) throw new Error("setpriv (Debian package util-linux) is needed to run servers as another user");
     return [cmd, args];
@@ -52,7 +48,9 @@ process.on("exit", () => {
   for (const [child, signal] of live) {
     try {
       if (isRunning(child) && child.pid) process.kill(child.pid, signal);
-    } catch { /* already gone */ }
+    } catch {
+      /* already gone */
+    }
   }
 });
 
@@ -60,12 +58,7 @@ export function isRunning(child: ChildProcess): boolean {
   return child.pid !== undefined && child.exitCode === null && child.signalCode === null;
 }
 
-export function spawnLogged(
-  name: string,
-  cmd: string,
-  args: string[],
-  opts: SpawnLoggedOptions,
-): ChildProcess {
+export function spawnLogged(name: string, cmd: string, args: string[], opts: SpawnLoggedOptions): ChildProcess {
   const signal = opts.exitSignal ?? "SIGTERM";
   const [bin, argv] = wrapCommand(cmd, args, { runAs: opts.runAs, parentDeathSignal: signal });
   fs.mkdirSync(path.dirname(opts.logFile), { recursive: true });
@@ -125,11 +118,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
  * Polls until check() resolves true. A check that throws aborts the wait at
  * once: checks return false for "not yet" and throw for "never".
  */
-export async function waitFor(
-  check: () => Promise<boolean>,
-  timeoutMs: number,
-  what: string,
-): Promise<void> {
+export async function waitFor(check: () => Promise<boolean>, timeoutMs: number, what: string): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   let delay = 20;
   for (;;) {
@@ -151,11 +140,7 @@ export function waitForExit(child: ChildProcess, timeoutMs: number): Promise<boo
   });
 }
 
-export async function stopChild(
-  child: ChildProcess,
-  timeoutMs = 5000,
-  signal: NodeJS.Signals = "SIGTERM",
-): Promise<void> {
+export async function stopChild(child: ChildProcess, timeoutMs = 5000, signal: NodeJS.Signals = "SIGTERM"): Promise<void> {
   if (!isRunning(child) || child.pid === undefined) return;
   try {
     process.kill(child.pid, signal);

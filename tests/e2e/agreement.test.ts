@@ -20,7 +20,11 @@ beforeAll(async () => {
   const [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
   const { dropIds } = await placedDrops(tech, { file: plainMp4(undefined, 4) });
   // Second readings 1, 4 and 30 frames longer: two agree, one is a discrepancy.
-  for (const [i, extra] of [[0, 1], [1, 4], [2, 30]] as const) {
+  for (const [i, extra] of [
+    [0, 1],
+    [1, 4],
+    [2, 30],
+  ] as const) {
     await read(a, dropIds[i], 2, 40);
     settled.push(await read(b, dropIds[i], 2, 40 + extra));
   }
@@ -62,7 +66,11 @@ describe("reviewer agreement page", () => {
     await screenshot(page, "agreement-table");
 
     // The largest disagreement links to its drop.
-    const top = page.getByRole("table", { name: /The drops whose readings differ most/ }).locator("tbody tr").first().getByRole("link");
+    const top = page
+      .getByRole("table", { name: /The drops whose readings differ most/ })
+      .locator("tbody tr")
+      .first()
+      .getByRole("link");
     const href = (await top.getAttribute("href"))!;
     expect(href).toMatch(/^\/drops\/[0-9a-f-]{36}$/);
     await top.click();

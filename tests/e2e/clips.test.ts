@@ -223,7 +223,13 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     expect(Math.abs(codes[codes.length - 1] - 150)).toBeLessThanOrEqual(1);
     expect(clip.index?.frameCount).toBe(codes.length);
     // Kept frames in the original's seconds (the trim keeps the original's timestamps).
-    expect(clip.trim).toMatchObject({ sourceName: name, requestedStartS: 3.5, requestedEndS: 6, keptFirstS: codes[0] / 25, keptLastS: codes[codes.length - 1] / 25 });
+    expect(clip.trim).toMatchObject({
+      sourceName: name,
+      requestedStartS: 3.5,
+      requestedEndS: 6,
+      keptFirstS: codes[0] / 25,
+      keptLastS: codes[codes.length - 1] / 25,
+    });
     await page.goto(`${APP_URL}/clips/${clip.id}`);
     expect(clip.trim!.note).toMatch(/kept the frames shown from 3 s to .* It starts before the start asked for/);
     await page.getByText(clip.trim!.note).waitFor();
@@ -239,7 +245,10 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     await recordings.getByLabel("Video files to upload").setInputFiles(raw);
     const row = recordings.getByRole("article", { name: new RegExp(name.replace(/\./g, "\\.")) });
     await row.getByRole("button", { name: `Upload whole file ${name}` }).click();
-    await row.getByText(/^This file is a raw H\.264 stream: .*no frame carries a time/).first().waitFor({ timeout: 30_000 });
+    await row
+      .getByText(/^This file is a raw H\.264 stream: .*no frame carries a time/)
+      .first()
+      .waitFor({ timeout: 30_000 });
     const steps = row.getByRole("list", { name: `Processing steps of ${name}` });
     expect(await steps.getByText("Not needed").count()).toBe(4);
     expect(await steps.getByText("Waiting").count()).toBe(0);

@@ -49,7 +49,9 @@ async function pageAs(email: string, password = demo.password): Promise<Page> {
 
 const dropsOnPage = (page: Page) => page.getByRole("region", { name: "Drops" });
 const dropRow = (page: Page, n: number): Locator =>
-  dropsOnPage(page).getByRole("row").filter({ has: page.getByRole("rowheader", { name: `Drop ${n}`, exact: true }) });
+  dropsOnPage(page)
+    .getByRole("row")
+    .filter({ has: page.getByRole("rowheader", { name: `Drop ${n}`, exact: true }) });
 const runDrops = async () => (await json<{ drops: DropView[] }>(await tech.get(`/api/runs/${runId}/drops`), 200)).drops;
 
 describe("drops in the browser: placed on a recording, queued for reviewers, listed for leads", () => {
@@ -77,14 +79,21 @@ describe("drops in the browser: placed on a recording, queued for reviewers, lis
     await second.getByRole("button", { name: "Save drop 2" }).click();
     await second.getByText("Saved.").waitFor();
 
-    for (const [row, frame] of [[first, "5"], [second, "20"]] as const) {
+    for (const [row, frame] of [
+      [first, "5"],
+      [second, "20"],
+    ] as const) {
       await row.getByRole("link", { name: clip.originalName }).waitFor();
       await row.getByRole("cell", { name: frame, exact: true }).waitFor();
     }
     await dropRow(page, 3).getByText("not placed").waitFor();
     await screenshot(page, "drops-placed");
     const drops = await runDrops();
-    expect(drops.map((d) => [d.ordinal, d.clip?.id ?? null, d.startFrame])).toEqual([[1, clip.id, 5], [2, clip.id, 20], [3, null, null]]);
+    expect(drops.map((d) => [d.ordinal, d.clip?.id ?? null, d.startFrame])).toEqual([
+      [1, clip.id, 5],
+      [2, clip.id, 20],
+      [3, null, null],
+    ]);
   });
 
   it("a reviewer sees only their own progress on the run, finds the drops in the queue, and follows the link", async () => {
@@ -136,7 +145,10 @@ describe("drops in the browser: placed on a recording, queued for reviewers, lis
     const lead = await pageAs(demo.email("lead"));
     await lead.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Discrepancies" }).click();
     await lead.waitForURL(`${APP_URL}/discrepancies`);
-    const row = lead.getByRole("table", { name: /readings disagree/ }).getByRole("row").filter({ hasText: serial });
+    const row = lead
+      .getByRole("table", { name: /readings disagree/ })
+      .getByRole("row")
+      .filter({ hasText: serial });
     await row.waitFor();
     for (const text of [reference, "0.28 s", "by Reader Quillon", "1.6 s", "by Reader Brackwater", "+1.32 s", "dispense 0 s · clear +1.32 s", "±0.5 s"]) {
       await row.getByText(text, { exact: true }).waitFor();

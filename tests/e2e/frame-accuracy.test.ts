@@ -36,7 +36,15 @@ beforeAll(async () => {
   let chain: Promise<unknown> = Promise.resolve();
   for (const [name, opts] of CLIP_VARIANTS) {
     const clip = chain.then(async () => {
-      const { file } = await renderSyntheticClip({ width: 320, height: 180, length: 3, drops: 1, noise: 4, ...opts, out: path.join(dir, variantFile(name, opts)) });
+      const { file } = await renderSyntheticClip({
+        width: 320,
+        height: 180,
+        length: 3,
+        drops: 1,
+        noise: 4,
+        ...opts,
+        out: path.join(dir, variantFile(name, opts)),
+      });
       return (await uploadFile(tech, runId, file)).clipId;
     });
     chain = clip.catch(() => undefined);
@@ -116,14 +124,22 @@ describe("frame accuracy of the player in Chromium, for every kind of recording"
       await page.goto(`${APP_URL}/clips/${clip.id}`);
       const player = page.getByTestId("frame-player");
       await player.waitFor();
-      const size = await page.getByTestId("player-video").evaluate((v: HTMLVideoElement) => new Promise<[number, number]>((r) => (v.videoWidth ? r([v.videoWidth, v.videoHeight]) : v.addEventListener("loadedmetadata", () => r([v.videoWidth, v.videoHeight]), { once: true }))));
+      const size = await page
+        .getByTestId("player-video")
+        .evaluate(
+          (v: HTMLVideoElement) =>
+            new Promise<[number, number]>((r) =>
+              v.videoWidth ? r([v.videoWidth, v.videoHeight]) : v.addEventListener("loadedmetadata", () => r([v.videoWidth, v.videoHeight]), { once: true }),
+            ),
+        );
       const g = frameCodeGeometry(size[0], size[1]);
       const wrong: string[] = [];
       let checked = 0;
       const check = async (target: number, how: string) => {
         const seen = await settleAndRead(page, target, g);
         checked++;
-        if (seen.status !== "confirmed" || seen.frame !== String(target) || seen.code !== target) wrong.push(`${how} → asked ${target}, player ${seen.status} ${seen.frame || "(none)"}, picture ${seen.code}`);
+        if (seen.status !== "confirmed" || seen.frame !== String(target) || seen.code !== target)
+          wrong.push(`${how} → asked ${target}, player ${seen.status} ${seen.frame || "(none)"}, picture ${seen.code}`);
       };
 
       await check(0, "opening");
@@ -193,7 +209,15 @@ describe("the player's picture tools in Chromium", () => {
     await page.keyboard.press("?");
     const keys = page.getByRole("dialog", { name: "Player keys" });
     await keys.waitFor();
-    for (const label of ["One frame back", "Ten frames forward", "One second forward (by the frames' own times)", "Play or pause", "Zoom in", "Make the frame on screen the reference frame"]) await keys.getByText(label, { exact: true }).waitFor();
+    for (const label of [
+      "One frame back",
+      "Ten frames forward",
+      "One second forward (by the frames' own times)",
+      "Play or pause",
+      "Zoom in",
+      "Make the frame on screen the reference frame",
+    ])
+      await keys.getByText(label, { exact: true }).waitFor();
     await screenshot(page, "player-key-map");
     await page.keyboard.press("Escape");
     await keys.waitFor({ state: "hidden" });

@@ -73,7 +73,10 @@ describe("intake in the browser: a submission, its samples, a flagged run and it
     await single.getByText(`Sample ${serialOz} was added to round 1.`).waitFor();
     const round1 = technician.getByRole("region", { name: /^Round 1/ });
     // 240 oz is 15 lb exactly: 6803.89 g.
-    await round1.getByRole("row", { name: new RegExp(serialOz) }).getByText("6803.89 g").waitFor();
+    await round1
+      .getByRole("row", { name: new RegExp(serialOz) })
+      .getByText("6803.89 g")
+      .waitFor();
     await screenshot(technician, "intake-sample-added");
 
     const bulk = technician.getByRole("region", { name: "Import samples from CSV" });

@@ -22,7 +22,17 @@ const dir = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wick
 
 beforeAll(async () => {
   const tech = await signedIn(demo.email("technician"), demo.password);
-  const r = await renderSyntheticClip({ out: path.join(dir, "marks.mp4"), width: 320, height: 180, length: 6, drops: 1, durations: [2.2], fps: "25", start: 0.4, noise: 4 });
+  const r = await renderSyntheticClip({
+    out: path.join(dir, "marks.mp4"),
+    width: 320,
+    height: 180,
+    length: 6,
+    drops: 1,
+    durations: [2.2],
+    fps: "25",
+    start: 0.4,
+    noise: 4,
+  });
   const { dropIds } = await placedDrops(tech, { file: r.file, startFrame: START });
   expect(dropIds.length).toBeGreaterThanOrEqual(2);
   [readDropId, disputedId] = dropIds;
@@ -106,12 +116,15 @@ describe("marks during playback", () => {
 });
 
 describe("the ruling form", () => {
-  it("starts with no choice, names the missing choice and reason before asking to confirm, and refuses third marks during playback", { timeout: 120_000 }, async () => {
+  it("starts with no choice, names the missing choice and reason before asking to confirm, and refuses third marks during playback", {
+    timeout: 120_000,
+  }, async () => {
     const { page, dialogs } = await openAs(["lead"], `${APP_URL}/drops/${disputedId}/ruling`);
     const form = page.getByRole("region", { name: "Ruling" });
     const record = form.getByRole("button", { name: "Record the ruling" });
     await record.waitFor();
-    for (const label of ["Accept the first reading", "Accept the second reading", /^Make a third reading/]) expect(await form.getByLabel(label).isChecked()).toBe(false);
+    for (const label of ["Accept the first reading", "Accept the second reading", /^Make a third reading/])
+      expect(await form.getByLabel(label).isChecked()).toBe(false);
 
     await record.click();
     await form.getByText("Choose the first reading, the second, or a third reading of your own.").waitFor();

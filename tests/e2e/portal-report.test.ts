@@ -25,7 +25,12 @@ beforeAll(async () => {
   const [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
   await newEdition(lead, { effectiveFrom: "2005-06-01", minAbsorptionS: 0.5, guardBandS: 0.1, roundSizes: [2], readingToleranceS: 0.5 });
   // A manufacturer of its own, so its list holds only this test's two submissions.
-  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Quillmere Spheres (invented)"), contactEmails: [] }), 201)).organisation.id;
+  const org = (
+    await json<{ organisation: { id: string } }>(
+      await lead.post("/api/organisations", { name: uniqueName("Quillmere Spheres (invented)"), contactEmails: [] }),
+      201,
+    )
+  ).organisation.id;
   released = await newSubmission(lead, org, { receivedOn: "2005-06-02" });
   waiting = await newSubmission(lead, org, { receivedOn: "2005-06-02" });
   for (const serial of ["PR-1", "PR-2"]) {
@@ -74,7 +79,11 @@ describe("the manufacturer sees released results in the portal", () => {
     const rows = results.getByRole("table", { name: "Results of each sample ball" }).locator("tbody tr");
     expect(await rows.count()).toBe(2);
     expect(await rows.first().textContent()).toContain("1.2 s");
-    const leadName = (await db()("users").where({ email: demo.email("lead") }).first("name")).name;
+    const leadName = (
+      await db()("users")
+        .where({ email: demo.email("lead") })
+        .first("name")
+    ).name;
     expect(await results.textContent()).toContain(`Signed off by${leadName}When`);
     expect(await results.textContent()).toMatch(/Meaningresults reviewed and releasedRevision1/);
     expect(await results.getByText("The governing specification and the testing laboratory").count()).toBe(1);
@@ -83,7 +92,11 @@ describe("the manufacturer sees released results in the portal", () => {
     const link = results.getByRole("link", { name: "Test report (PDF)" });
     const [download] = await Promise.all([page.waitForEvent("download"), link.click()]);
     expect(download.suggestedFilename()).toBe(`test-report-${released.reference}.pdf`);
-    expect(readFileSync((await download.path())!).subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    expect(
+      readFileSync((await download.path())!)
+        .subarray(0, 5)
+        .toString("latin1"),
+    ).toBe("%PDF-");
     // The same link, asked with the manufacturer's session: a PDF, not a refusal.
     const res = await page.request.get(`${APP_URL}${await link.getAttribute("href")}`);
     expect(res.status()).toBe(200);

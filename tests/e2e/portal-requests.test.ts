@@ -27,7 +27,8 @@ async function pageFor(email: string, password: string, home: string): Promise<P
 beforeAll(async () => {
   browser = await launch();
   const lead = await signedIn(demo.email("lead"), demo.password);
-  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Portal maker (invented)") }), 201)).organisation;
+  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Portal maker (invented)") }), 201))
+    .organisation;
   maker = await makeUser(["manufacturer"], { organisationId: org.id, name: "Portal Maker" });
   submission = await newSubmission(lead, org.id, { receivedOn: today(), modelName: uniqueName("Harbour Glide (invented)") });
   const dueBy = new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10);

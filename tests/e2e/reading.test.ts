@@ -20,7 +20,17 @@ const dir = mkdtempSync(path.join(process.env.TEST_TMP_DIR ?? os.tmpdir(), "wick
 
 beforeAll(async () => {
   const tech = await signedIn(demo.email("technician"), demo.password);
-  const r = await renderSyntheticClip({ out: path.join(dir, "reading.mp4"), width: 320, height: 180, length: 6, drops: 1, durations: [2.2], fps: "25", start: 1.2, noise: 4 });
+  const r = await renderSyntheticClip({
+    out: path.join(dir, "reading.mp4"),
+    width: 320,
+    height: 180,
+    length: 6,
+    drops: 1,
+    durations: [2.2],
+    fps: "25",
+    start: 1.2,
+    noise: 4,
+  });
   truth = r.truth;
   dropId = (await placedDrops(tech, { file: r.file, startFrame: Math.max(0, truth.drops[0].dispenseFrame - 10) })).dropIds[0];
   browser = await launch();
@@ -32,7 +42,9 @@ afterAll(async () => {
 
 async function settled(page: Page, frame: number) {
   const player = page.getByTestId("frame-player");
-  await expect.poll(async () => [await player.getAttribute("data-status"), await player.getAttribute("data-frame")], { timeout: 15_000 }).toEqual(["confirmed", String(frame)]);
+  await expect
+    .poll(async () => [await player.getAttribute("data-status"), await player.getAttribute("data-frame")], { timeout: 15_000 })
+    .toEqual(["confirmed", String(frame)]);
 }
 
 /** G opens the go-to field; the picture takes the focus back so the mark keys reach the player. */

@@ -37,7 +37,9 @@ describe("the demo submission's results", () => {
     await expect.poll(() => decision.isVisible(), { timeout: 20_000 }).toBe(true);
     // Four ball means inside the 135–145 s guard band, none below: round 3 is asked for.
     expect(await decision.textContent()).toContain("Close to limit — more samples");
-    expect(await page.getByTestId("decision-explanation").textContent()).toMatch(/^After round 2: 4 of 10 balls are close to the 135 s minimum, inside its 10 s guard band: .*Round 3 asks for 24 more samples\.$/);
+    expect(await page.getByTestId("decision-explanation").textContent()).toMatch(
+      /^After round 2: 4 of 10 balls are close to the 135 s minimum, inside its 10 s guard band: .*Round 3 asks for 24 more samples\.$/,
+    );
     expect(await page.getByTestId("ball-row").count()).toBe(DEMO_BALLS.length);
     expect(await page.getByText("outlier?").count()).toBeGreaterThanOrEqual(1);
 

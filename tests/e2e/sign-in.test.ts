@@ -13,7 +13,12 @@ const CASES = [
   { role: "technician", home: "/overview", nav: ["Overview", "Submissions", "Editions", "Help"] },
   { role: "reviewer", home: "/overview", nav: ["Overview", "Submissions", "Reading queue", "Help"] },
   // A lead's administration sits under one menu, so the bar keeps to one line.
-  { role: "lead", home: "/overview", nav: ["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Help"], menu: ["Editions", "Organisations", "Users", "Audit", "Outbox"] },
+  {
+    role: "lead",
+    home: "/overview",
+    nav: ["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Help"],
+    menu: ["Editions", "Organisations", "Users", "Audit", "Outbox"],
+  },
   { role: "manufacturer", home: "/portal", nav: ["Our submissions", "Help"] },
 ] as const;
 

@@ -72,12 +72,18 @@ describe("the lead's desk", () => {
     await page.goto(`${APP_URL}/submissions/${submissionId}/results`);
     const panel = page.getByRole("region", { name: "Sign-off" });
     // Said before any password is typed, and refused again by the server if the lead signs anyway.
-    await panel.getByRole("status").filter({ hasText: /^Not ready to sign: The decision is still pending\./ }).waitFor();
+    await panel
+      .getByRole("status")
+      .filter({ hasText: /^Not ready to sign: The decision is still pending\./ })
+      .waitFor();
     const password = panel.getByLabel("Your password, to sign");
     await password.fill(demo.password);
     await panel.getByRole("button", { name: "Sign off results" }).click();
     // Ball LD-1 has two settled drops of three: its result, and so the decision, waits for the third.
-    await panel.getByRole("alert").filter({ hasText: /decision is still pending|not settled yet/ }).waitFor();
+    await panel
+      .getByRole("alert")
+      .filter({ hasText: /decision is still pending|not settled yet/ })
+      .waitFor();
     expect(await password.inputValue()).toBe(demo.password);
     await screenshot(page, "signoff-refused-unsettled");
   });
@@ -96,7 +102,9 @@ describe("the lead's desk", () => {
   it("signs off with the password after a wrong one is refused in words, and sees the lock", async () => {
     await page.goto(`${APP_URL}/submissions/${submissionId}/results`);
     const panel = page.getByRole("region", { name: "Sign-off" });
-    await expect.poll(() => panel.getByTestId("signoff-state").textContent(), { timeout: 20_000 }).toBe("Revision 1, not signed off: changes can still be made.");
+    await expect
+      .poll(() => panel.getByTestId("signoff-state").textContent(), { timeout: 20_000 })
+      .toBe("Revision 1, not signed off: changes can still be made.");
     expect(await panel.getByText("results reviewed and released").first().isVisible()).toBe(true);
     const password = panel.getByLabel("Your password, to sign");
     await password.fill("not my password");
@@ -111,7 +119,10 @@ describe("the lead's desk", () => {
     const signature = panel.getByTestId("signature");
     expect(await signature.textContent()).toMatch(/Revision 1 signed off by .*Meaning of the signature: “results reviewed and released”\.First signature/);
     // The decision panel no longer asks for a sign-off that has happened.
-    await page.getByRole("region", { name: /^Decision after round/ }).getByText("Nothing: the results are signed off and released.", { exact: false }).waitFor();
+    await page
+      .getByRole("region", { name: /^Decision after round/ })
+      .getByText("Nothing: the results are signed off and released.", { exact: false })
+      .waitFor();
     await screenshot(page, "signoff-signed");
 
     await page.goto(`${APP_URL}/submissions/${submissionId}`);
@@ -122,7 +133,10 @@ describe("the lead's desk", () => {
   it("after sign-off the run page offers no change and says why; a reading change is refused with the reason", async () => {
     // The run page no longer offers "Edit conditions" only to refuse the save: it shows the lock instead.
     await page.goto(`${APP_URL}/runs/${runId}`);
-    await page.getByTestId("run-lock-notice").filter({ hasText: locked(1) }).waitFor({ timeout: 20_000 });
+    await page
+      .getByTestId("run-lock-notice")
+      .filter({ hasText: locked(1) })
+      .waitFor({ timeout: 20_000 });
     expect(await page.getByRole("button", { name: "Edit conditions" }).count()).toBe(0);
     await screenshot(page, "signoff-run-change-refused");
     const res = await a.post(`/api/drops/${disputed}/readings`, { dispenseFrame: 6 });
@@ -138,8 +152,12 @@ describe("the lead's desk", () => {
     await panel.getByText("at least 10 characters").waitFor();
     await reason.fill("The second ball's run conditions are to be corrected.");
     await panel.getByRole("button", { name: "Re-open as revision 2" }).click();
-    await expect.poll(() => panel.getByTestId("signoff-state").textContent(), { timeout: 20_000 }).toBe("Revision 2, not signed off: changes can still be made.");
-    expect(await panel.getByTestId("reopening").textContent()).toMatch(/Re-opened as revision 2 by .*Reason: The second ball's run conditions are to be corrected\./);
+    await expect
+      .poll(() => panel.getByTestId("signoff-state").textContent(), { timeout: 20_000 })
+      .toBe("Revision 2, not signed off: changes can still be made.");
+    expect(await panel.getByTestId("reopening").textContent()).toMatch(
+      /Re-opened as revision 2 by .*Reason: The second ball's run conditions are to be corrected\./,
+    );
     await screenshot(page, "signoff-reopened");
   });
 
@@ -163,7 +181,9 @@ describe("the lead's desk", () => {
     await page.getByRole("button", { name: "Show events" }).click();
     await page.waitForURL(/action=ruling/);
     // The previous list stays on screen until the filtered one arrives.
-    await expect.poll(() => events.evaluateAll((els) => els.length > 0 && els.every((e) => e.textContent?.includes("ruling."))), { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(() => events.evaluateAll((els) => els.length > 0 && els.every((e) => e.textContent?.includes("ruling."))), { timeout: 20_000 })
+      .toBe(true);
     expect(await events.filter({ hasText: "The second reader's clear frame is where the film has gone." }).count()).toBe(1);
     await screenshot(page, "audit-rulings");
   });

@@ -13,7 +13,26 @@ const title = () => ["-metadata", `title=${randomBytes(8).toString("hex")}`];
 export function sizedMp4(megabytes: number, name = `sized-${randomBytes(3).toString("hex")}.mp4`): { file: string; size: number } {
   const file = path.join(mediaDir(), name);
   const seconds = (megabytes / 1.9).toFixed(2);
-  ffmpeg(["-f", "lavfi", "-i", `testsrc2=size=1280x720:rate=25:duration=${seconds}`, "-c:v", "libx264", "-preset", "ultrafast", "-b:v", "16M", "-maxrate", "16M", "-bufsize", "4M", "-pix_fmt", "yuv420p", ...title(), file]);
+  ffmpeg([
+    "-f",
+    "lavfi",
+    "-i",
+    `testsrc2=size=1280x720:rate=25:duration=${seconds}`,
+    "-c:v",
+    "libx264",
+    "-preset",
+    "ultrafast",
+    "-b:v",
+    "16M",
+    "-maxrate",
+    "16M",
+    "-bufsize",
+    "4M",
+    "-pix_fmt",
+    "yuv420p",
+    ...title(),
+    file,
+  ]);
   return { file, size: statSync(file).size };
 }
 
@@ -26,10 +45,28 @@ export function frameCodedMp4(opts: { seconds?: number; fps?: number; gop?: numb
   const file = path.join(mediaDir(), opts.name ?? `coded-${randomBytes(3).toString("hex")}.mp4`);
   const [w, h] = [640, 360];
   ffmpeg([
-    "-f", "lavfi", "-i", `testsrc2=size=${w}x${h}:rate=${fps}:duration=${seconds}`,
-    "-vf", frameCodeFilter(w, h),
-    "-c:v", "libx264", "-preset", "veryfast", "-crf", "16", "-g", String(gop), "-keyint_min", String(gop), "-sc_threshold", "0",
-    "-pix_fmt", "yuv420p", ...title(), file,
+    "-f",
+    "lavfi",
+    "-i",
+    `testsrc2=size=${w}x${h}:rate=${fps}:duration=${seconds}`,
+    "-vf",
+    frameCodeFilter(w, h),
+    "-c:v",
+    "libx264",
+    "-preset",
+    "veryfast",
+    "-crf",
+    "16",
+    "-g",
+    String(gop),
+    "-keyint_min",
+    String(gop),
+    "-sc_threshold",
+    "0",
+    "-pix_fmt",
+    "yuv420p",
+    ...title(),
+    file,
   ]);
   return file;
 }

@@ -6,13 +6,29 @@ import type { Client } from "./app";
 
 // Uploads a file the way the browser does: start, sign parts, PUT each part straight to storage,
 // record its ETag, complete. `stopAfter` leaves the upload unfinished after that many parts.
-export async function uploadFile(c: Client, runId: string, file: string, opts: { name?: string; stopAfter?: number; type?: string; trim?: TrimSource } = {}): Promise<{ clipId: string; partCount: number }> {
+export async function uploadFile(
+  c: Client,
+  runId: string,
+  file: string,
+  opts: { name?: string; stopAfter?: number; type?: string; trim?: TrimSource } = {},
+): Promise<{ clipId: string; partCount: number }> {
   const size = (await stat(file)).size;
-  const start = await c.post(`/api/runs/${runId}/clips`, { fileName: opts.name ?? file.split("/").pop(), size, contentType: opts.type ?? "video/mp4", ...(opts.trim ? { trim: opts.trim } : {}) });
+  const start = await c.post(`/api/runs/${runId}/clips`, {
+    fileName: opts.name ?? file.split("/").pop(),
+    size,
+    contentType: opts.type ?? "video/mp4",
+    ...(opts.trim ? { trim: opts.trim } : {}),
+  });
   const startText = await start.text();
   expect(start.status, startText).toBe(201);
   const plan = JSON.parse(startText) as { clipId: string; partSize: number; partCount: number };
-  await sendParts(c, plan.clipId, file, plan, Array.from({ length: Math.min(plan.partCount, opts.stopAfter ?? plan.partCount) }, (_, i) => i + 1));
+  await sendParts(
+    c,
+    plan.clipId,
+    file,
+    plan,
+    Array.from({ length: Math.min(plan.partCount, opts.stopAfter ?? plan.partCount) }, (_, i) => i + 1),
+  );
   if (opts.stopAfter === undefined) await complete(c, plan.clipId);
   return { clipId: plan.clipId, partCount: plan.partCount };
 }

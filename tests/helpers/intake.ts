@@ -23,16 +23,40 @@ async function created<T>(res: Response, key: string): Promise<T> {
   return JSON.parse(text)[key] as T;
 }
 
-export async function newSubmission(c: Client, organisationId: string, over: Record<string, unknown> = {}): Promise<{ id: string; reference: string; editionId: string }> {
-  return created(await c.post("/api/submissions", { organisationId, modelName: `Test model ${tag()}`, kind: "approval", weightClassesLb: [15, 16], receivedOn: today(), ...over }), "submission");
+export async function newSubmission(
+  c: Client,
+  organisationId: string,
+  over: Record<string, unknown> = {},
+): Promise<{ id: string; reference: string; editionId: string }> {
+  return created(
+    await c.post("/api/submissions", {
+      organisationId,
+      modelName: `Test model ${tag()}`,
+      kind: "approval",
+      weightClassesLb: [15, 16],
+      receivedOn: today(),
+      ...over,
+    }),
+    "submission",
+  );
 }
 
 export async function newSample(c: Client, submissionId: string, over: Record<string, unknown> = {}): Promise<{ id: string; serial: string }> {
-  const body = { serial: `T-${tag()}`, weight: { value: 16, unit: "lb" }, receivedAt: new Date(Date.now() - 48 * 3_600_000).toISOString(), acclimationStartedAt: new Date(Date.now() - 30 * 3_600_000).toISOString(), ...over };
+  const body = {
+    serial: `T-${tag()}`,
+    weight: { value: 16, unit: "lb" },
+    receivedAt: new Date(Date.now() - 48 * 3_600_000).toISOString(),
+    acclimationStartedAt: new Date(Date.now() - 30 * 3_600_000).toISOString(),
+    ...over,
+  };
   return created(await c.post(`/api/submissions/${submissionId}/samples`, body), "sample");
 }
 
-export async function newRun(c: Client, sampleId: string, over: Record<string, unknown> = {}): Promise<{ id: string; flags: { code: string; message: string }[]; dropCount: number; needsAcceptance: boolean }> {
+export async function newRun(
+  c: Client,
+  sampleId: string,
+  over: Record<string, unknown> = {},
+): Promise<{ id: string; flags: { code: string; message: string }[]; dropCount: number; needsAcceptance: boolean }> {
   return created(await c.post(`/api/samples/${sampleId}/runs`, goodRun(over)), "run");
 }
 

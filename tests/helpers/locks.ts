@@ -10,7 +10,10 @@ export interface Settling<T> {
 /** A request in flight, and whether it has answered yet. */
 export function settles<T>(promise: Promise<T>): Settling<T> {
   let finished = false;
-  promise.then(() => (finished = true), () => (finished = true));
+  promise.then(
+    () => (finished = true),
+    () => (finished = true),
+  );
   return { promise, done: () => finished };
 }
 

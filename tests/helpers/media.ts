@@ -17,7 +17,21 @@ const ffmpeg = (args: string[]) => execFileSync("ffmpeg", ["-hide_banner", "-v",
 export function plainMp4(name = `plain-${randomBytes(3).toString("hex")}.mp4`, seconds = 2): string {
   const out = path.join(mediaDir(), name);
   // The random title makes each file's bytes (and SHA-256) its own, so duplicates are only the ones a test makes.
-  ffmpeg(["-f", "lavfi", "-i", `testsrc2=size=320x180:rate=25:duration=${seconds}`, "-c:v", "libx264", "-preset", "ultrafast", "-pix_fmt", "yuv420p", "-metadata", `title=${randomBytes(8).toString("hex")}`, out]);
+  ffmpeg([
+    "-f",
+    "lavfi",
+    "-i",
+    `testsrc2=size=320x180:rate=25:duration=${seconds}`,
+    "-c:v",
+    "libx264",
+    "-preset",
+    "ultrafast",
+    "-pix_fmt",
+    "yuv420p",
+    "-metadata",
+    `title=${randomBytes(8).toString("hex")}`,
+    out,
+  ]);
   return out;
 }
 
@@ -60,6 +74,24 @@ export function largeTextFile(bytes: number): string {
 /** A clip that needs a stepping proxy (Matroska, B-frames) and takes a few seconds to proxy. */
 export function clipNeedingProxy(seconds = 15): string {
   const out = path.join(mediaDir(), `needs-proxy-${randomBytes(3).toString("hex")}.mkv`);
-  ffmpeg(["-f", "lavfi", "-i", `testsrc2=size=1280x720:rate=60:duration=${seconds}`, "-c:v", "libx264", "-preset", "ultrafast", "-bf", "3", "-g", "120", "-pix_fmt", "yuv420p", "-metadata", `title=${randomBytes(8).toString("hex")}`, out]);
+  ffmpeg([
+    "-f",
+    "lavfi",
+    "-i",
+    `testsrc2=size=1280x720:rate=60:duration=${seconds}`,
+    "-c:v",
+    "libx264",
+    "-preset",
+    "ultrafast",
+    "-bf",
+    "3",
+    "-g",
+    "120",
+    "-pix_fmt",
+    "yuv420p",
+    "-metadata",
+    `title=${randomBytes(8).toString("hex")}`,
+    out,
+  ]);
   return out;
 }

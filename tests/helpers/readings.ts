@@ -21,11 +21,16 @@ export async function placedDrops(c: Client, opts: { file?: string; startFrame?:
 }
 
 /** Uploads a clip to the run, waits until the worker has made it ready, and places every drop on it. */
-export async function placeOnRun(c: Client, runId: string, opts: { file?: string; startFrame?: number } = {}): Promise<{ runId: string; clipId: string; dropIds: string[] }> {
+export async function placeOnRun(
+  c: Client,
+  runId: string,
+  opts: { file?: string; startFrame?: number } = {},
+): Promise<{ runId: string; clipId: string; dropIds: string[] }> {
   const clip = await waitForClip(c, (await uploadFile(c, runId, opts.file ?? plainMp4())).clipId);
   expect(clip.status, clip.rejectReason ?? "").toBe("ready");
   const { drops } = await json<{ drops: DropView[] }>(await c.get(`/api/runs/${runId}/drops`), 200);
-  for (const d of drops) await json(await c.request("PUT", `/api/drops/${d.id}/placement`, { json: { clipId: clip.id, startFrame: opts.startFrame ?? 0 } }), 200);
+  for (const d of drops)
+    await json(await c.request("PUT", `/api/drops/${d.id}/placement`, { json: { clipId: clip.id, startFrame: opts.startFrame ?? 0 } }), 200);
   return { runId, clipId: clip.id, dropIds: drops.map((d) => d.id) };
 }
 

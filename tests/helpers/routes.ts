@@ -13,11 +13,11 @@ function walk(dir: string): string[] {
 
 /** "GET /api/users/[id]" for each exported method of each route file. */
 export function discoverRoutes(): string[] {
-  return walk(root).flatMap((file) => {
-    const src = readFileSync(file, "utf8");
-    const route = `/api/${path.relative(root, path.dirname(file)).split(path.sep).join("/")}`;
-    return METHODS.filter((m) => new RegExp(`export\\s+(const|async function|function)\\s+${m}\\b|\\bas\\s+${m}\\b`).test(src)).map(
-      (m) => `${m} ${route}`,
-    );
-  }).sort();
+  return walk(root)
+    .flatMap((file) => {
+      const src = readFileSync(file, "utf8");
+      const route = `/api/${path.relative(root, path.dirname(file)).split(path.sep).join("/")}`;
+      return METHODS.filter((m) => new RegExp(`export\\s+(const|async function|function)\\s+${m}\\b|\\bas\\s+${m}\\b`).test(src)).map((m) => `${m} ${route}`);
+    })
+    .sort();
 }

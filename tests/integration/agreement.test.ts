@@ -41,7 +41,8 @@ beforeAll(async () => {
 
   // Drop 1: the first reader corrects their reading before the second reads; the correction counts.
   const old = (await read(a, run1[0], 2, 20)).mySubmitted!.id;
-  const draft = (await json<{ drop: DropView }>(await a.post(`/api/readings/${old}/corrections`, { reason: "Marked the clear frame far too early." }), 201)).drop.myDraft!;
+  const draft = (await json<{ drop: DropView }>(await a.post(`/api/readings/${old}/corrections`, { reason: "Marked the clear frame far too early." }), 201))
+    .drop.myDraft!;
   await json(await a.patch(`/api/readings/${draft.id}`, { clearFrame: 40 }), 200);
   const corrected = await submit(a, draft.id);
   // Marks per drop (first reader, second reader): one frame apart, six frames apart, thirty apart.
@@ -98,7 +99,10 @@ describe("GET /api/agreement", () => {
   it("gives each reviewer's bias against the agreed value over the drops that have one", async () => {
     const r = await agreement(lead);
     const agreed = pairs.filter((p) => p.agreed !== null);
-    for (const [who, pick] of [["a", (p: (typeof pairs)[number]) => p.first], ["b", (p: (typeof pairs)[number]) => p.second]] as const) {
+    for (const [who, pick] of [
+      ["a", (p: (typeof pairs)[number]) => p.first],
+      ["b", (p: (typeof pairs)[number]) => p.second],
+    ] as const) {
       const diffs = agreed.map((p) => pick(p) - p.agreed!);
       const mean = (diffs[0] + diffs[1]) / 2;
       const sd = Math.abs(diffs[0] - diffs[1]) / Math.SQRT2; // two values: sd = |x₁ − x₂| / √2

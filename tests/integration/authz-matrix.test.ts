@@ -53,7 +53,7 @@ const uploadedClip = async () => (await uploadFile(lead, clipRun, clipFile, { st
 // one the matrix reviewer is blind to (404), while staff who do not read drops may see it.
 const drops: string[] = [];
 let readerClient: Client;
-const once = <T,>(make: () => Promise<T>) => {
+const once = <T>(make: () => Promise<T>) => {
   let p: Promise<T> | undefined;
   return () => (p ??= make());
 };
@@ -88,7 +88,11 @@ const MATRIX: Record<string, Entry> = {
   "POST /api/users/[id]/invite": { path: async () => `/api/users/${await invitedUser()}/invite`, body: () => ({}), expect: leadOnly(200) },
   "GET /api/organisations": { path: "/api/organisations", expect: staffOnly(200) },
   "POST /api/organisations": { path: "/api/organisations", body: () => ({ name: uniqueName("Matrix Org"), contactEmails: [] }), expect: leadOnly(201) },
-  "PATCH /api/organisations/[id]": { path: async () => `/api/organisations/${org}`, body: () => ({ contactEmails: ["matrix@example.test"] }), expect: leadOnly(200) },
+  "PATCH /api/organisations/[id]": {
+    path: async () => `/api/organisations/${org}`,
+    body: () => ({ contactEmails: ["matrix@example.test"] }),
+    expect: leadOnly(200),
+  },
   "GET /api/editions": { path: "/api/editions", expect: staffOnly(200) },
   "POST /api/editions": { path: "/api/editions", body: () => editionBody(), expect: leadOnly(201) },
   "GET /api/editions/[id]": { path: async () => `/api/editions/${(await newEdition(lead)).id}`, expect: staffOnly(200) },
@@ -117,15 +121,35 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, expect: signedInOnly(200) },
   "PUT /api/runs/[id]": { path: async () => `/api/runs/${await run()}`, body: () => goodRun(), expect: intakeEditors(200) },
   "GET /api/runs/[id]/clips": { path: async () => `/api/runs/${clipRun}/clips`, expect: clipReaders(200) },
-  "POST /api/runs/[id]/clips": { path: async () => `/api/runs/${clipRun}/clips`, body: () => ({ fileName: "m.mp4", size: 1000, contentType: "video/mp4" }), expect: clipEditors(201) },
+  "POST /api/runs/[id]/clips": {
+    path: async () => `/api/runs/${clipRun}/clips`,
+    body: () => ({ fileName: "m.mp4", size: 1000, contentType: "video/mp4" }),
+    expect: clipEditors(201),
+  },
   "GET /api/clips/[id]": { path: async () => `/api/clips/${readyClip}`, expect: clipReaders(200) },
   "GET /api/clips/[id]/upload": { path: async () => `/api/clips/${await uploadingClip()}/upload`, expect: clipEditors(200) },
-  "POST /api/clips/[id]/parts/sign": { path: async () => `/api/clips/${await uploadingClip()}/parts/sign`, body: () => ({ partNumbers: [1] }), expect: clipEditors(200) },
-  "PUT /api/clips/[id]/parts/[part]": { path: async () => `/api/clips/${await uploadingClip()}/parts/1`, body: () => ({ etag: '"abc"', size: 10 }), expect: clipEditors(200) },
+  "POST /api/clips/[id]/parts/sign": {
+    path: async () => `/api/clips/${await uploadingClip()}/parts/sign`,
+    body: () => ({ partNumbers: [1] }),
+    expect: clipEditors(200),
+  },
+  "PUT /api/clips/[id]/parts/[part]": {
+    path: async () => `/api/clips/${await uploadingClip()}/parts/1`,
+    body: () => ({ etag: '"abc"', size: 10 }),
+    expect: clipEditors(200),
+  },
   "POST /api/clips/[id]/complete": { path: async () => `/api/clips/${await uploadedClip()}/complete`, body: () => ({}), expect: clipEditors(200) },
   "GET /api/clips/[id]/frames": { path: async () => `/api/clips/${readyClip}/frames`, expect: clipReaders(200) },
-  "POST /api/runs/[id]/acceptance": { path: async () => `/api/runs/${await flaggedRun()}/acceptance`, body: () => ({ reason: "Matrix acceptance reason." }), expect: leadOnly(200) },
-  "POST /api/runs/[id]/void": { path: async () => `/api/runs/${await run()}/void`, body: () => ({ reason: "Matrix void: recorded on the wrong ball." }), expect: leadOnly(200) },
+  "POST /api/runs/[id]/acceptance": {
+    path: async () => `/api/runs/${await flaggedRun()}/acceptance`,
+    body: () => ({ reason: "Matrix acceptance reason." }),
+    expect: leadOnly(200),
+  },
+  "POST /api/runs/[id]/void": {
+    path: async () => `/api/runs/${await run()}/void`,
+    body: () => ({ reason: "Matrix void: recorded on the wrong ball." }),
+    expect: leadOnly(200),
+  },
   "GET /api/invites/[token]": { path: "/api/invites/no-such-token", expect: everyone(404) },
   "POST /api/invites/[token]": { path: "/api/invites/no-such-token", body: () => ({ password: "long enough password" }), expect: everyone(404) },
   "GET /api/dev/outbox": { path: "/api/dev/outbox", expect: leadOnly(200) },
@@ -133,28 +157,59 @@ const MATRIX: Record<string, Entry> = {
   "GET /api/account/notifications": { path: "/api/account/notifications", expect: signedInOnly(200) },
   "PUT /api/account/notifications": { path: "/api/account/notifications", body: () => ({ optOut: [] }), expect: signedInOnly(200) },
   "GET /api/submissions/[id]/sample-requests": { path: async () => `/api/submissions/${await submission()}/sample-requests`, expect: signedInOnly(200) },
-  "POST /api/submissions/[id]/sample-requests": { path: async () => `/api/submissions/${await submission()}/sample-requests`, body: sampleRequestBody, expect: intakeEditors(201) },
+  "POST /api/submissions/[id]/sample-requests": {
+    path: async () => `/api/submissions/${await submission()}/sample-requests`,
+    body: sampleRequestBody,
+    expect: intakeEditors(201),
+  },
   // Only the manufacturer that owns the submission acknowledges its requests.
-  "POST /api/sample-requests/[id]/acknowledge": { path: async () => `/api/sample-requests/${await sampleRequest()}/acknowledge`, body: () => ({ shippingDetails: "Courier, two boxes" }), expect: { anon: 401, technician: 403, reviewer: 403, lead: 403, manufacturer: 200 } },
+  "POST /api/sample-requests/[id]/acknowledge": {
+    path: async () => `/api/sample-requests/${await sampleRequest()}/acknowledge`,
+    body: () => ({ shippingDetails: "Courier, two boxes" }),
+    expect: { anon: 401, technician: 403, reviewer: 403, lead: 403, manufacturer: 200 },
+  },
   "POST /api/dev/bench-insert": { path: "/api/dev/bench-insert", body: () => ({}), expect: signedInOnly(404) },
   "GET /api/runs/[id]/drops": { path: async () => `/api/runs/${clipRun}/drops`, expect: clipReaders(200) },
   "GET /api/drops/[id]": { path: async () => `/api/drops/${drops[0]}`, expect: clipReaders(200) },
-  "PUT /api/drops/[id]/placement": { path: async () => `/api/drops/${drops[0]}/placement`, body: () => ({ clipId: readyClip, startFrame: 0 }), expect: clipEditors(200) },
+  "PUT /api/drops/[id]/placement": {
+    path: async () => `/api/drops/${drops[0]}/placement`,
+    body: () => ({ clipId: readyClip, startFrame: 0 }),
+    expect: clipEditors(200),
+  },
   "POST /api/drops/[id]/readings": { path: async () => `/api/drops/${drops[1]}/readings`, body: () => ({ dispenseFrame: 3 }), expect: readers(200) },
-  "GET /api/readings/[id]": { path: async () => `/api/readings/${await otherReading()}`, expect: { anon: 401, technician: 200, reviewer: 404, lead: 200, manufacturer: 404 } },
+  "GET /api/readings/[id]": {
+    path: async () => `/api/readings/${await otherReading()}`,
+    expect: { anon: 401, technician: 200, reviewer: 404, lead: 200, manufacturer: 404 },
+  },
   "PATCH /api/readings/[id]": { path: async () => `/api/readings/${await startDraft(drops[1])}`, body: () => ({ clearFrame: 30 }), expect: readers(200) },
   "DELETE /api/readings/[id]": { path: async () => `/api/readings/${await startDraft(drops[5])}`, expect: readers(200) },
   "POST /api/readings/[id]/submit": { path: async () => `/api/readings/${await draftToSubmit()}/submit`, body: () => ({}), expect: readers(200) },
-  "POST /api/readings/[id]/corrections": { path: async () => `/api/readings/${await submittedReading()}/corrections`, body: () => ({ reason: "Matrix correction reason." }), expect: readers(201) },
+  "POST /api/readings/[id]/corrections": {
+    path: async () => `/api/readings/${await submittedReading()}/corrections`,
+    body: () => ({ reason: "Matrix correction reason." }),
+    expect: readers(201),
+  },
   "GET /api/work-queue": { path: "/api/work-queue", expect: readers(200) },
   "GET /api/discrepancies": { path: "/api/discrepancies", expect: leadOnly(200) },
   "GET /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, expect: clipReaders(200) },
   // The lead passes the gate and is told why this unread drop cannot be ruled.
-  "POST /api/drops/[id]/ruling": { path: async () => `/api/drops/${drops[0]}/ruling`, body: () => ({ chosen: "first", reason: "Matrix ruling reason." }), expect: leadOnly(409) },
+  "POST /api/drops/[id]/ruling": {
+    path: async () => `/api/drops/${drops[0]}/ruling`,
+    body: () => ({ chosen: "first", reason: "Matrix ruling reason." }),
+    expect: leadOnly(409),
+  },
   "GET /api/submissions/[id]/signoff": { path: async () => `/api/submissions/${await submission()}/signoff`, expect: leadOnly(200) },
   // A new submission has no results to sign, and nothing signed to re-open: the lead is told so.
-  "POST /api/submissions/[id]/signoff": { path: async () => `/api/submissions/${await submission()}/signoff`, body: () => ({ password: PASSWORD }), expect: leadOnly(409) },
-  "POST /api/submissions/[id]/reopen": { path: async () => `/api/submissions/${await submission()}/reopen`, body: () => ({ reason: "Matrix re-opening reason." }), expect: leadOnly(409) },
+  "POST /api/submissions/[id]/signoff": {
+    path: async () => `/api/submissions/${await submission()}/signoff`,
+    body: () => ({ password: PASSWORD }),
+    expect: leadOnly(409),
+  },
+  "POST /api/submissions/[id]/reopen": {
+    path: async () => `/api/submissions/${await submission()}/reopen`,
+    body: () => ({ reason: "Matrix re-opening reason." }),
+    expect: leadOnly(409),
+  },
   "GET /api/audit": { path: "/api/audit?pageSize=5", expect: leadOnly(200) },
   // Results reach the manufacturer only once released: until then its own submission's results are refused.
   "GET /api/submissions/[id]/results": { path: async () => `/api/submissions/${await submission()}/results`, expect: staffOnly(200) },

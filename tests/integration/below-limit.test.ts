@@ -34,8 +34,17 @@ beforeAll(async () => {
   [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
   // The only edition in force on 2005-07-02, so the submission received that day is judged by it.
   // Its rule lets the rounds decide, so a ball below the minimum is reported while testing goes on.
-  await newEdition(lead, { effectiveFrom: "2005-07-01", belowMinimumRule: "reported", minAbsorptionS: 2.0, guardBandS: 0.3, dropsPerBall: 3, roundSizes: [2, 3], readingToleranceS: 0.5 });
-  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Below-limit maker (invented)") }), 201)).organisation;
+  await newEdition(lead, {
+    effectiveFrom: "2005-07-01",
+    belowMinimumRule: "reported",
+    minAbsorptionS: 2.0,
+    guardBandS: 0.3,
+    dropsPerBall: 3,
+    roundSizes: [2, 3],
+    readingToleranceS: 0.5,
+  });
+  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Below-limit maker (invented)") }), 201))
+    .organisation;
   orgId = org.id;
   makerEmail = (await makeUser(["manufacturer"], { organisationId: org.id })).email;
   submission = await newSubmission(lead, org.id, { receivedOn: "2005-07-02" });

@@ -104,7 +104,10 @@ describe("blind second reading, for every endpoint that returns drops or reading
       expect(normalised(px, [x, sx.myDraft!.id]), who).toEqual(normalised(py, [y, sy.myDraft!.id]));
       const [gx, gy] = [await json(await c.get(`/api/readings/${sx.myDraft!.id}`), 200), await json(await c.get(`/api/readings/${sy.myDraft!.id}`), 200)];
       expect(normalised(gx, [x, sx.myDraft!.id]), who).toEqual(normalised(gy, [y, sy.myDraft!.id]));
-      const [ex, ey] = [await json(await c.request("DELETE", `/api/readings/${sx.myDraft!.id}`), 200), await json(await c.request("DELETE", `/api/readings/${sy.myDraft!.id}`), 200)];
+      const [ex, ey] = [
+        await json(await c.request("DELETE", `/api/readings/${sx.myDraft!.id}`), 200),
+        await json(await c.request("DELETE", `/api/readings/${sy.myDraft!.id}`), 200),
+      ];
       expect(normalised(ex, [x]), who).toEqual(normalised(ey, [y]));
     }
   });

@@ -39,7 +39,10 @@ afterAll(() => closeDb());
  */
 function ffprobeFrameTimes(file: string, container: string): number[] {
   const entries = container === "avi" ? "packet=dts" : "frame=best_effort_timestamp";
-  const out = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", entries, "-of", "json", file], { encoding: "utf8", maxBuffer: 1 << 26 });
+  const out = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", entries, "-of", "json", file], {
+    encoding: "utf8",
+    maxBuffer: 1 << 26,
+  });
   const json = JSON.parse(out) as { frames?: { best_effort_timestamp: number }[]; packets?: { dts: number }[] };
   const times = container === "avi" ? json.packets!.map((p) => p.dts) : json.frames!.map((f) => f.best_effort_timestamp);
   return container === "avi" ? times.sort((a, b) => a - b) : times;
@@ -47,14 +50,28 @@ function ffprobeFrameTimes(file: string, container: string): number[] {
 
 /** Display positions of the frames a decoder marks as key frames. */
 function decodedKeyframes(file: string): number[] {
-  const out = execFileSync("ffprobe", ["-v", "quiet", "-select_streams", "v:0", "-show_entries", "frame=key_frame", "-of", "csv=p=0", file], { encoding: "utf8", maxBuffer: 1 << 26 });
-  return out.split("\n").filter((l) => /^\d/.test(l)).flatMap((l, i) => (l.startsWith("1") ? [i] : []));
+  const out = execFileSync("ffprobe", ["-v", "quiet", "-select_streams", "v:0", "-show_entries", "frame=key_frame", "-of", "csv=p=0", file], {
+    encoding: "utf8",
+    maxBuffer: 1 << 26,
+  });
+  return out
+    .split("\n")
+    .filter((l) => /^\d/.test(l))
+    .flatMap((l, i) => (l.startsWith("1") ? [i] : []));
 }
 
 describe("clip processing for every kind of recording", () => {
   for (const [name, opts] of CLIP_VARIANTS) {
     it(`${name}: index equals the decoded frame times, and the steppable frames carry their codes in order`, { timeout: 120_000 }, async () => {
-      const { file, truth } = await renderSyntheticClip({ width: 320, height: 180, length: 3, drops: 1, noise: 4, ...opts, out: path.join(dir, variantFile(name, opts)) });
+      const { file, truth } = await renderSyntheticClip({
+        width: 320,
+        height: 180,
+        length: 3,
+        drops: 1,
+        noise: 4,
+        ...opts,
+        out: path.join(dir, variantFile(name, opts)),
+      });
       const clip = await waitForClip(tech, (await uploadFile(tech, runId, file)).clipId);
       expect(clip.status, clip.rejectReason ?? "").toBe("ready");
       const index = await (await tech.get(`/api/clips/${clip.id}/frames`)).json();
@@ -74,11 +91,35 @@ describe("clip processing for every kind of recording", () => {
 
   it("an original that already steps well is played as it is, with no proxy", { timeout: 60_000 }, async () => {
     const file = path.join(dir, "steps-well.mp4");
-    execFileSync("ffmpeg", ["-v", "error", "-y", "-f", "lavfi", "-i", "testsrc2=size=320x180:rate=30:duration=2", "-c:v", "libx264", "-preset", "ultrafast", "-bf", "0", "-g", "15", "-pix_fmt", "yuv420p", "-movflags", "+faststart", file]);
+    execFileSync("ffmpeg", [
+      "-v",
+      "error",
+      "-y",
+      "-f",
+      "lavfi",
+      "-i",
+      "testsrc2=size=320x180:rate=30:duration=2",
+      "-c:v",
+      "libx264",
+      "-preset",
+      "ultrafast",
+      "-bf",
+      "0",
+      "-g",
+      "15",
+      "-pix_fmt",
+      "yuv420p",
+      "-movflags",
+      "+faststart",
+      file,
+    ]);
     const clip = await waitForClip(tech, (await uploadFile(tech, runId, file)).clipId);
     expect(clip.status).toBe("ready");
     expect(clip.playback!.isProxy).toBe(false);
-    expect(clip.steps.find((s) => s.step === "proxy")).toMatchObject({ state: "skipped", reason: expect.stringMatching(/^Not needed: the original steps well/) });
+    expect(clip.steps.find((s) => s.step === "proxy")).toMatchObject({
+      state: "skipped",
+      reason: expect.stringMatching(/^Not needed: the original steps well/),
+    });
   });
 });
 
@@ -126,7 +167,9 @@ describe("a clip trimmed in the browser", () => {
   it("records the frames really kept, in the original's seconds, on the clip and in the report", { timeout: 120_000 }, async () => {
     // A keyframe every second at 25 fps; asking from 3.5 s, a copy without re-encoding starts at 3 s.
     const source = frameCodedMp4({ seconds: 8, fps: 25, gop: 25, name: "trim-source.mp4" });
-    const packets = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts_time,dts_time", "-of", "csv=p=0", source], { encoding: "utf8" });
+    const packets = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=pts_time,dts_time", "-of", "csv=p=0", source], {
+      encoding: "utf8",
+    });
     const out = path.join(dir, "trim-source-trim-3.5-6.mp4");
     // The same ffmpeg arguments the browser's trim uses (ffmpeg.wasm there, Debian's ffmpeg here).
     execFileSync("ffmpeg", ["-v", "error", "-y", ...trimArgs(source, out, 3.5, copyEndFor(parsePacketCsv(packets, 0), 6)).slice(1)]);
@@ -145,7 +188,12 @@ describe("a clip trimmed in the browser", () => {
   });
 
   it("refuses a trim window that ends before it starts, in words", async () => {
-    const res = await tech.post(`/api/runs/${runId}/clips`, { fileName: "x.mp4", size: 10, contentType: "video/mp4", trim: { sourceName: "x.mp4", sourceStartS: 0, requestedStartS: 5, requestedEndS: 2 } });
+    const res = await tech.post(`/api/runs/${runId}/clips`, {
+      fileName: "x.mp4",
+      size: 10,
+      contentType: "video/mp4",
+      trim: { sourceName: "x.mp4", sourceStartS: 0, requestedStartS: 5, requestedEndS: 2 },
+    });
     expect(res.status).toBe(422);
     expect(await res.text()).toContain("The trim end must come after its start.");
   });

@@ -54,7 +54,12 @@ describe("a manufacturer and another organisation's records", () => {
   const attempts: [string, string, () => string, unknown?][] = [
     ["read the submission", "GET", () => `/api/submissions/${other.submission}`],
     ["change the submission", "PATCH", () => `/api/submissions/${other.submission}`, { notes: "mine now" }],
-    ["add a sample", "POST", () => `/api/submissions/${other.submission}/samples`, { serial: "X", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() }],
+    [
+      "add a sample",
+      "POST",
+      () => `/api/submissions/${other.submission}/samples`,
+      { serial: "X", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() },
+    ],
     ["import samples", "POST", () => `/api/submissions/${other.submission}/samples/import`, { csv: "X,7000", unit: "g", receivedAt: new Date().toISOString() }],
     ["change a sample", "PATCH", () => `/api/samples/${other.sample}`, { notes: "mine" }],
     ["delete a sample", "DELETE", () => `/api/samples/${other.sample}`],
@@ -77,5 +82,4 @@ describe("a manufacturer and another organisation's records", () => {
     expect(row.notes).toBe("");
     expect(await db()("samples").where({ id: other.sample }).first("id")).toBeTruthy();
   });
-
 });

@@ -25,8 +25,12 @@ afterAll(async () => {
 });
 
 async function demoRuns() {
-  return db()("runs as r").join("samples as x", "x.id", "r.sample_id").join("submissions as s", "s.id", "x.submission_id")
-    .where("s.reference", DEMO_READ_SUBMISSION).orderBy("x.serial").select("r.id", "x.serial", "r.accepted_at", "r.accepted_by", "r.accept_reason");
+  return db()("runs as r")
+    .join("samples as x", "x.id", "r.sample_id")
+    .join("submissions as s", "s.id", "x.submission_id")
+    .where("s.reference", DEMO_READ_SUBMISSION)
+    .orderBy("x.serial")
+    .select("r.id", "x.serial", "r.accepted_at", "r.accepted_by", "r.accept_reason");
 }
 
 /** Everything the seed writes, to compare before and after a second call. */
@@ -52,7 +56,11 @@ describe("the demo's read submission", () => {
     expect(submitted).toBe(60);
     expect([0, 60]).toContain(result.readingsSubmitted);
 
-    const users = Object.fromEntries((await db()("users").whereIn("email", ["reviewer@marrowfield.test", "reviewer2@marrowfield.test", "lead@marrowfield.test"]).select("email", "id")).map((u) => [u.email, u.id]));
+    const users = Object.fromEntries(
+      (await db()("users").whereIn("email", ["reviewer@marrowfield.test", "reviewer2@marrowfield.test", "lead@marrowfield.test"]).select("email", "id")).map(
+        (u) => [u.email, u.id],
+      ),
+    );
     const runs = await demoRuns();
     expect(runs.map((r) => r.serial)).toEqual(DEMO_BALLS.map((b) => b.serial).sort());
     const means = new Map<string, number[]>();

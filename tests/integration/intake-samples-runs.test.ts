@@ -22,24 +22,37 @@ beforeAll(async () => {
 afterAll(() => closeDb());
 
 const samplesOf = async (c: Client, id: string) =>
-  ((await (await c.get(`/api/submissions/${id}`)).json()).rounds as { round: number; samples: { serial: string; weightG: number }[] }[]).flatMap((r) => r.samples);
+  ((await (await c.get(`/api/submissions/${id}`)).json()).rounds as { round: number; samples: { serial: string; weightG: number }[] }[]).flatMap(
+    (r) => r.samples,
+  );
 
 describe("samples", () => {
   it("stores a weight entered in ounces as grams and refuses a duplicate serial", async () => {
     const s = await newSubmission(tech, org);
     const sample = await newSample(tech, s.id, { serial: "OZ-1", weight: { value: "256", unit: "oz" } });
     expect(sample).toMatchObject({ serial: "OZ-1", weightG: 7257.48, round: 1 });
-    const dup = await tech.post(`/api/submissions/${s.id}/samples`, { serial: "oz-1", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() });
+    const dup = await tech.post(`/api/submissions/${s.id}/samples`, {
+      serial: "oz-1",
+      weight: { value: 7000, unit: "g" },
+      receivedAt: new Date().toISOString(),
+    });
     expect(dup.status).toBe(409);
     expect((await dup.json()).error.fields.serial).toBe("This serial is already recorded.");
   });
 
   it("imports a good CSV in one go", async () => {
     const s = await newSubmission(tech, org);
-    const res = await tech.post(`/api/submissions/${s.id}/samples/import`, { csv: "serial,weight\nC-1,16\nC-2,15.5\n", unit: "lb", receivedAt: new Date().toISOString() });
+    const res = await tech.post(`/api/submissions/${s.id}/samples/import`, {
+      csv: "serial,weight\nC-1,16\nC-2,15.5\n",
+      unit: "lb",
+      receivedAt: new Date().toISOString(),
+    });
     expect(res.status).toBe(201);
     expect(await res.json()).toEqual({ created: 2 });
-    expect((await samplesOf(tech, s.id)).map((x) => [x.serial, x.weightG])).toEqual([["C-1", 7257.48], ["C-2", 7030.68]]);
+    expect((await samplesOf(tech, s.id)).map((x) => [x.serial, x.weightG])).toEqual([
+      ["C-1", 7257.48],
+      ["C-2", 7030.68],
+    ]);
     const [event] = await findAuditEvents(db(), { entity: "submission", entityId: s.id, action: "sample.imported" });
     expect((event.after as { samples: unknown[] }).samples).toHaveLength(2);
   });
@@ -54,7 +67,11 @@ describe("samples", () => {
     expect(body.message).toBe("2 rows of the CSV need correcting; nothing was saved.");
     expect(body.fields).toEqual({ "line 3": "The serial number is missing.", "line 4": 'The weight "lots" is not a number.' });
 
-    const clash = await tech.post(`/api/submissions/${s.id}/samples/import`, { csv: "serial,weight\nOK-1,7000\nTAKEN,7000\n", unit: "g", receivedAt: new Date().toISOString() });
+    const clash = await tech.post(`/api/submissions/${s.id}/samples/import`, {
+      csv: "serial,weight\nOK-1,7000\nTAKEN,7000\n",
+      unit: "g",
+      receivedAt: new Date().toISOString(),
+    });
     expect((await clash.json()).error.fields).toEqual({ "line 3": "Serial TAKEN is already recorded for this submission." });
     expect((await samplesOf(tech, s.id)).map((x) => x.serial)).toEqual(["TAKEN"]);
   });
@@ -100,7 +117,11 @@ describe("runs and their conditions", () => {
 
     const accepted = await lead.post(`/api/runs/${run.id}/acceptance`, { reason: "Room logger shows the ball was in the room for 30 h." });
     expect(accepted.status).toBe(200);
-    expect((await accepted.json()).run).toMatchObject({ needsAcceptance: false, acceptedByName: "Demo Lead", acceptReason: "Room logger shows the ball was in the room for 30 h." });
+    expect((await accepted.json()).run).toMatchObject({
+      needsAcceptance: false,
+      acceptedByName: "Demo Lead",
+      acceptReason: "Room logger shows the ball was in the room for 30 h.",
+    });
     expect((await lead.post(`/api/runs/${run.id}/acceptance`, { reason: "Accept it a second time." })).status).toBe(409);
     expect(await listedFlags()).toBe(0);
     const [event] = await findAuditEvents(db(), { entity: "run", entityId: run.id, action: "run.accepted" });
@@ -121,7 +142,10 @@ describe("runs and their conditions", () => {
   it("explains bad run input in words", async () => {
     const s = await newSubmission(tech, org);
     const sample = await newSample(tech, s.id);
-    const res = await tech.post(`/api/samples/${sample.id}/runs`, goodRun({ testedAt: "yesterday", roomTemp: { value: "warm", unit: "C" }, roughnessRaUm: [-1], oilLot: "" }));
+    const res = await tech.post(
+      `/api/samples/${sample.id}/runs`,
+      goodRun({ testedAt: "yesterday", roomTemp: { value: "warm", unit: "C" }, roughnessRaUm: [-1], oilLot: "" }),
+    );
     expect(res.status).toBe(422);
     expect((await res.json()).error.fields).toEqual({
       testedAt: "Tested at must be a date and time with its zone (ISO 8601).",

@@ -44,13 +44,25 @@ describe("submissions", () => {
 
   it("links a surveillance submission to an approval of the same organisation only", async () => {
     const approval = await newSubmission(tech, orgA);
-    const ok = await tech.post("/api/submissions", { organisationId: orgA, modelName: "Watched", kind: "surveillance", receivedOn: today(), approvalSubmissionId: approval.id });
+    const ok = await tech.post("/api/submissions", {
+      organisationId: orgA,
+      modelName: "Watched",
+      kind: "surveillance",
+      receivedOn: today(),
+      approvalSubmissionId: approval.id,
+    });
     expect(ok.status).toBe(201);
     expect((await ok.json()).submission.approvalReference).toBe(approval.reference);
 
     const missing = await tech.post("/api/submissions", { organisationId: orgA, modelName: "Watched", kind: "surveillance", receivedOn: today() });
     expect((await missing.json()).error.fields.approvalSubmissionId).toMatch(/must name the approval submission/);
-    const crossed = await tech.post("/api/submissions", { organisationId: orgB, modelName: "Watched", kind: "surveillance", receivedOn: today(), approvalSubmissionId: approval.id });
+    const crossed = await tech.post("/api/submissions", {
+      organisationId: orgB,
+      modelName: "Watched",
+      kind: "surveillance",
+      receivedOn: today(),
+      approvalSubmissionId: approval.id,
+    });
     expect((await crossed.json()).error.message).toMatch(/belongs to another organisation/);
   });
 
@@ -76,7 +88,9 @@ describe("submissions", () => {
     const page1 = await (await tech.get(`/api/submissions?q=${encodeURIComponent(model)}&sort=received&dir=asc&pageSize=5&page=1`)).json();
     expect(page1.total).toBe(3);
     expect(page1.rows.map((r: { receivedOn: string }) => r.receivedOn)).toEqual(["2026-07-01", "2026-07-02", "2026-07-03"]);
-    const small = await (await tech.get(`/api/submissions?q=${encodeURIComponent(model)}&sort=model&dir=desc&pageSize=5&page=1&receivedFrom=2026-07-02`)).json();
+    const small = await (
+      await tech.get(`/api/submissions?q=${encodeURIComponent(model)}&sort=model&dir=desc&pageSize=5&page=1&receivedFrom=2026-07-02`)
+    ).json();
     expect(small.rows.map((r: { modelName: string }) => r.modelName)).toEqual([`${model} 2`, `${model} 1`]);
     const none = await (await tech.get(`/api/submissions?q=${encodeURIComponent(model)}&organisationId=${orgA}`)).json();
     expect(none.total).toBe(0);
@@ -88,10 +102,14 @@ describe("submissions", () => {
 describe("specification editions", () => {
   it("refuses to change an edition a submission uses, in the API and in the database itself", async () => {
     const demoEdition = await db()("specification_editions").where({ name: DEMO_EDITION.name }).first("id");
-    const res = await lead.request("PUT", `/api/editions/${demoEdition.id}`, { json: editionBody({ name: DEMO_EDITION.name, effectiveFrom: "2026-01-01", minAbsorptionS: 100 }) });
+    const res = await lead.request("PUT", `/api/editions/${demoEdition.id}`, {
+      json: editionBody({ name: DEMO_EDITION.name, effectiveFrom: "2026-01-01", minAbsorptionS: 100 }),
+    });
     expect(res.status).toBe(409);
     expect((await res.json()).error.message).toMatch(/cannot be changed. Create a new edition from it instead/);
-    await expect(db()("specification_editions").where({ id: demoEdition.id }).update({ min_absorption_s: 100 })).rejects.toThrow(/used by a submission and cannot be changed/);
+    await expect(db()("specification_editions").where({ id: demoEdition.id }).update({ min_absorption_s: 100 })).rejects.toThrow(
+      /used by a submission and cannot be changed/,
+    );
     const still = await (await lead.get(`/api/editions/${demoEdition.id}`)).json();
     expect(still.edition.minAbsorptionS).toBe(135);
     expect(still.edition.usedBy.length).toBeGreaterThan(0);

@@ -48,7 +48,9 @@ describe("invitations", () => {
     expect(await page.text()).toContain("already been used");
 
     const second = await invite(lead, { email: uniqueEmail("late"), name: "Late", roles: ["technician"] });
-    await db()("invites").where({ token_hash: hashToken(tokenOf(second.link)) }).update({ expires_at: new Date(Date.now() - 1000) });
+    await db()("invites")
+      .where({ token_hash: hashToken(tokenOf(second.link)) })
+      .update({ expires_at: new Date(Date.now() - 1000) });
     const expired = await visitor.post(`/api/invites/${tokenOf(second.link)}`, { password: "some password" });
     expect(expired.status).toBe(410);
     expect((await expired.json()).error.message).toMatch(/expired/);
@@ -87,7 +89,6 @@ describe("invitations", () => {
 });
 
 describe("bad input to user management", () => {
-
   it("answers each kind of bad input with 422 in words and saves nothing", async () => {
     const lead = await signedIn(demo.email("lead"), demo.password);
     const longEmail = uniqueEmail("long");

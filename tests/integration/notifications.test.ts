@@ -33,8 +33,16 @@ describe("notification settings", () => {
     const refused = await c.request("PUT", "/api/account/notifications", { json: { optOut: ["results.released"] } });
     expect(refused.status).toBe(422);
     expect(JSON.stringify((await refused.json()).error)).toContain("That notice cannot be switched off.");
-    const off = await json<{ settings: Setting[] }>(await c.request("PUT", "/api/account/notifications", { json: { optOut: ["reviewer.digest", "discrepancy.new"] } }), 200);
-    expect(off.settings.filter((s) => !s.on).map((s) => s.kind).sort()).toEqual(["discrepancy.new", "reviewer.digest"]);
+    const off = await json<{ settings: Setting[] }>(
+      await c.request("PUT", "/api/account/notifications", { json: { optOut: ["reviewer.digest", "discrepancy.new"] } }),
+      200,
+    );
+    expect(
+      off.settings
+        .filter((s) => !s.on)
+        .map((s) => s.kind)
+        .sort(),
+    ).toEqual(["discrepancy.new", "reviewer.digest"]);
     expect(off.settings.filter((s) => s.essential).every((s) => s.on)).toBe(true);
     await json(await c.request("PUT", "/api/account/notifications", { json: { optOut: ["discrepancy.new"] } }), 200);
     expect((await settingsOf(c)).find((s) => s.kind === "reviewer.digest")?.on).toBe(true);
@@ -49,7 +57,17 @@ describe("notification settings", () => {
     const drop = { id: crypto.randomUUID(), submissionReference: "D-OPT", sampleSerial: "B1", ordinal: 1 } as DropRow;
     await db().transaction((trx) => notifyDiscrepancy(trx, drop, 0.8));
     expect(await runReviewerDigest({ now: new Date("2091-03-04T07:00:00Z"), reviewerIds: [u.id] })).toBe(0);
-    const essential = samplesRequestedMail({ appUrl: "http://x.test", submissionId: crypto.randomUUID(), reference: "D-OPT", modelName: "Model", round: 2, count: 3, weight: "15 lb", dueBy: "2091-04-01", note: "" });
+    const essential = samplesRequestedMail({
+      appUrl: "http://x.test",
+      submissionId: crypto.randomUUID(),
+      reference: "D-OPT",
+      modelName: "Model",
+      round: 2,
+      count: 3,
+      weight: "15 lb",
+      dueBy: "2091-04-01",
+      note: "",
+    });
     const ids = await db().transaction((trx) => queueMail(trx, [{ userId: u.id, email: u.email, optOut: ["discrepancy.new", "reviewer.digest"] }], essential));
     expect(ids).toHaveLength(1);
     const [m] = await waitForMail(u.email, 1, 30_000);
@@ -73,7 +91,12 @@ describe("the reviewers' daily digest", () => {
     const drops: string[] = [];
     for (let i = 0; i < 2; i++) drops.push(...(await placeOnRun(tech, (await newRun(tech, (await newSample(tech, s.id)).id)).id)).dropIds);
     n = drops.length;
-    const [ur, ux, uy, uo] = [await makeUser(["reviewer"], { name: "Digest Reader" }), await makeUser(["reviewer"]), await makeUser(["reviewer"]), await makeUser(["reviewer"], { optOut: ["reviewer.digest"] })];
+    const [ur, ux, uy, uo] = [
+      await makeUser(["reviewer"], { name: "Digest Reader" }),
+      await makeUser(["reviewer"]),
+      await makeUser(["reviewer"]),
+      await makeUser(["reviewer"], { optOut: ["reviewer.digest"] }),
+    ];
     [r, skipped] = [ur, uo];
     const [cr, cx, cy] = await Promise.all([ur, ux, uy].map((u) => signedIn(u.email, u.password)));
     const [d0, d1, d2, d3] = drops;
@@ -89,10 +112,13 @@ describe("the reviewers' daily digest", () => {
     const at = new Date(`${day}T07:00:00Z`);
     expect(await runReviewerDigest({ now: at, reviewerIds: [r.id, skipped.id] })).toBe(1);
     expect(await runReviewerDigest({ now: at, reviewerIds: [r.id, skipped.id] })).toBe(0);
-    const mine = digestsOf(await waitForMail(r.email, 1, 30_000).then(async () => {
-      for (let i = 0; i < 100 && digestsOf(await mailsTo(r.email), day).length === 0; i++) await sleep(300);
-      return mailsTo(r.email);
-    }), day);
+    const mine = digestsOf(
+      await waitForMail(r.email, 1, 30_000).then(async () => {
+        for (let i = 0; i < 100 && digestsOf(await mailsTo(r.email), day).length === 0; i++) await sleep(300);
+        return mailsTo(r.email);
+      }),
+      day,
+    );
     expect(mine).toHaveLength(1);
     expect(mine[0].subject).toMatch(new RegExp(`^${day}: \\d+ drops? waiting for you to read$`));
     expect(mine[0].text).toContain("Hello Digest Reader,");

@@ -101,10 +101,12 @@ describe("events write mail in their own transaction", () => {
     const org = await demoOrganisationId();
     const maker = await makeUser(["manufacturer"], { organisationId: org });
     const sub = await db()("submissions").where({ organisation_id: org }).orderBy("reference").first("id");
-    await expect(db().transaction(async (trx) => {
-      await notifyResultsReleased(trx, sub.id, 91);
-      throw new Error("sign-off refused");
-    })).rejects.toThrow("sign-off refused");
+    await expect(
+      db().transaction(async (trx) => {
+        await notifyResultsReleased(trx, sub.id, 91);
+        throw new Error("sign-off refused");
+      }),
+    ).rejects.toThrow("sign-off refused");
     await db().transaction((trx) => notifyResultsReleased(trx, sub.id, 92));
     const [m] = await waitForMail(maker.email, 1, 30_000);
     expect(m.subject).toContain("results released (revision 92)");

@@ -27,7 +27,18 @@ beforeAll(async () => {
   lead = await signedIn(demo.email("lead"), demo.password);
   const [ua, ub] = [await makeUser(["reviewer"]), await makeUser(["reviewer"])];
   [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
-  const r = await renderSyntheticClip({ out: path.join(dir, "drops.mp4"), width: 320, height: 180, length: 9, drops: 3, durations: [1.9, 2.3, 1.7], fps: "30000/1001", vfr: true, start: 3.5, noise: 4 });
+  const r = await renderSyntheticClip({
+    out: path.join(dir, "drops.mp4"),
+    width: 320,
+    height: 180,
+    length: 9,
+    drops: 3,
+    durations: [1.9, 2.3, 1.7],
+    fps: "30000/1001",
+    vfr: true,
+    start: 3.5,
+    noise: 4,
+  });
   truth = r.truth;
   ({ dropIds, clipId } = await placedDrops(tech, { file: r.file, startFrame: truth.drops[0].dispenseFrame }));
 }, 120_000);
@@ -126,7 +137,10 @@ describe("what a reviewer's reading cannot be", () => {
     const d = await read(c, drops[0], 2, 25);
     const old = d.mySubmitted!.id;
     expect((await json(await c.post(`/api/readings/${old}/corrections`, { reason: "typo" }), 422)).error.fields.reason).toMatch(/at least 10/);
-    const started = await json<{ drop: DropView }>(await c.post(`/api/readings/${old}/corrections`, { reason: "Marked the clear frame a few frames early." }), 201);
+    const started = await json<{ drop: DropView }>(
+      await c.post(`/api/readings/${old}/corrections`, { reason: "Marked the clear frame a few frames early." }),
+      201,
+    );
     const draft = started.drop.myDraft!;
     expect(draft).toMatchObject({ supersedesId: old, clearFrame: 25, correctionReason: "Marked the clear frame a few frames early." });
     await json(await c.patch(`/api/readings/${draft.id}`, { clearFrame: 28 }), 200);

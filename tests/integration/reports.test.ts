@@ -49,7 +49,11 @@ const layoutText = (name: string) => oneLine(execFileSync("pdftotext", ["-layout
 
 beforeAll(async () => {
   lead = await signedIn(demo.email("lead"), demo.password);
-  leadName = (await db()("users").where({ email: demo.email("lead") }).first("name")).name;
+  leadName = (
+    await db()("users")
+      .where({ email: demo.email("lead") })
+      .first("name")
+  ).name;
   const [ua, ub] = [await makeUser(["reviewer"], { name: "Reader One" }), await makeUser(["reviewer"], { name: "Reader Two" })];
   [a, b] = [await signedIn(ua.email, ua.password), await signedIn(ub.email, ub.password)];
   // The only edition in force on 2003-05-02: one round of two balls, 2.0 s minimum, 0.3 s guard band.
@@ -135,7 +139,17 @@ describe("the test report and exports", () => {
     expect(parsed.meta.fields).toEqual([...DROP_COLUMNS]);
     expect(parsed.data).toHaveLength(6);
     const first = parsed.data[0];
-    expect(first).toMatchObject({ submission: submission.reference, sample_serial: "RP-1", round: "1", drop: "1", state: "agreed", first_dispense_frame: "5", first_clear_frame: "75", second_clear_frame: "75", clip_sha256: hashes[0] });
+    expect(first).toMatchObject({
+      submission: submission.reference,
+      sample_serial: "RP-1",
+      round: "1",
+      drop: "1",
+      state: "agreed",
+      first_dispense_frame: "5",
+      first_clear_frame: "75",
+      second_clear_frame: "75",
+      clip_sha256: hashes[0],
+    });
     expect(Number(first.agreed_time_s)).toBeCloseTo(70 / 25, 9);
     expect(first.tested_at).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
   });
@@ -167,7 +181,9 @@ describe("the test report and exports", () => {
     expect(res.headers.get("content-type")).toBe("application/pdf");
     const flat = oneLine(await pdfText(res, "signed-1"));
     expect(flat).toMatch(new RegExp(`Signed off by ${leadName} on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC: results reviewed and released \\(revision 1\\)`));
-    expect(layoutText("signed-1")).toMatch(new RegExp(`Signed by ${leadName} When \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC Meaning results reviewed and released Revision 1`));
+    expect(layoutText("signed-1")).toMatch(
+      new RegExp(`Signed by ${leadName} When \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC Meaning results reviewed and released Revision 1`),
+    );
     expect(flat).toContain(`Oil absorption test report · ${submission.reference} · Revision 1`);
     expect(flat).not.toMatch(/DRAFT|not signed off/);
     expect(flat).toContain(RULING_REASON);
@@ -178,16 +194,26 @@ describe("the test report and exports", () => {
     expect(balls.meta.fields).toEqual([...BALL_COLUMNS]);
     expect(balls.data).toHaveLength(2);
     expect((await json<ResultsView>(await file(maker, "results"), 200)).decision.decision).toBe("meets limit");
-    expect(await json<ReleaseView>(await file(maker, "release"), 200)).toMatchObject({ state: "released", revision: 1, signature: { revision: 1, signedBy: leadName, meaning: "results reviewed and released" } });
+    expect(await json<ReleaseView>(await file(maker, "release"), 200)).toMatchObject({
+      state: "released",
+      revision: 1,
+      signature: { revision: 1, signedBy: leadName, meaning: "results reviewed and released" },
+    });
     const other = (await listOrganisations(db())).find((o) => o.id !== organisationId)!;
     const stranger = await manufacturerOf(other.id);
-    for (const name of ["report.pdf", "drops.csv", "balls.csv", "results", "release"]) expect(await refusal(await file(stranger, name), 404)).toBe("No such submission.");
+    for (const name of ["report.pdf", "drops.csv", "balls.csv", "results", "release"])
+      expect(await refusal(await file(stranger, name), 404)).toBe("No such submission.");
   }, 60_000);
 
   it("re-opened, the manufacturer is told the results are being revised; signed again, the report is revision 2 and says what changed", async () => {
     await json(await lead.post(`/api/submissions/${submission.id}/reopen`, { reason: REOPEN_REASON }), 201);
     for (const name of ["report.pdf", "drops.csv", "balls.csv", "results"]) expect(await refusal(await file(maker, name), 403)).toBe(BEING_REVISED);
-    expect(await json<ReleaseView>(await file(maker, "release"), 200)).toMatchObject({ state: "revising", revision: 2, message: BEING_REVISED, signature: { revision: 1 } });
+    expect(await json<ReleaseView>(await file(maker, "release"), 200)).toMatchObject({
+      state: "revising",
+      revision: 2,
+      message: BEING_REVISED,
+      signature: { revision: 1 },
+    });
     const draft = oneLine(await pdfText(await file(lead, "report.pdf"), "draft-2"));
     expect(draft).toContain("Revision 2, draft: not signed off");
     expect(draft).toContain(`Changed since revision 1 Re-opened because: ${REOPEN_REASON}`);

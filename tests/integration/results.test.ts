@@ -64,7 +64,9 @@ describe("results of a submission read through the API", () => {
     // One frame at 25 fps: U = 2·Δ/√6 (GUM 4.3.7 and 6.2).
     expect(A.drops[0].uncertaintyS).toBeCloseTo((2 * FRAME) / Math.sqrt(6), 9);
     expect(r.decision).toMatchObject({ decision: "close to limit — more samples", round: 1, closeBalls: ["R1-B"], nextRound: { round: 2, size: 3 } });
-    expect(r.decision.explanation).toBe("After round 1: 1 of 2 balls is close to the 2 s minimum, inside its 0.3 s guard band: R1-B (2.2 s). Round 2 asks for 3 more samples.");
+    expect(r.decision.explanation).toBe(
+      "After round 1: 1 of 2 balls is close to the 2 s minimum, inside its 0.3 s guard band: R1-B (2.2 s). Round 2 asks for 3 more samples.",
+    );
   }, 300_000);
 
   it("waits while a drop of round 2 has one reading, and says nothing of that reading", async () => {
@@ -94,7 +96,9 @@ describe("results of a submission read through the API", () => {
     expect(r.decision.tolerance!.sd).toBeCloseTo(s, 9);
     expect(r.decision.tolerance!.limit).toBeCloseTo(m - k * s, 9);
     expect(r.decision).toMatchObject({ decision: "below limit", decidedBy: "tolerance limit", finalRound: true });
-    expect(r.decision.explanation).toMatch(/^5 balls; lower 90 %\/95 % tolerance limit 1\.\d s is below the 2 s minimum; estimated fraction of balls below the minimum [\d.]+ %\.$/);
+    expect(r.decision.explanation).toMatch(
+      /^5 balls; lower 90 %\/95 % tolerance limit 1\.\d s is below the 2 s minimum; estimated fraction of balls below the minimum [\d.]+ %\.$/,
+    );
   }, 60_000);
 
   it("is refused to the manufacturer until released, and to anyone outside the lab's submission as not found", async () => {

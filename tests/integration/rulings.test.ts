@@ -44,7 +44,10 @@ describe("a lead rules on a discrepancy", () => {
   it("accepting the second reading sets the drop's time to it, with the reason, and leaves both readings as they were", async () => {
     const before = (await json<{ drop: DropView }>(await lead.get(`/api/drops/${dropIds[0]}`), 200)).drop;
     const second = before.readings.find((r) => r.slot === 2)!;
-    const { ruling } = await json<{ ruling: RulingView }>(await rule(lead, dropIds[0], { chosen: "second", reason: "The first reader marked the clear frame before the film had gone." }), 201);
+    const { ruling } = await json<{ ruling: RulingView }>(
+      await rule(lead, dropIds[0], { chosen: "second", reason: "The first reader marked the clear frame before the film had gone." }),
+      201,
+    );
     expect(ruling).toMatchObject({ chosen: "second", readingId: second.id, timeS: second.timeS });
     expect(ruling.timeS).toBeCloseTo(40 / 25, 9); // frames 2 → 42 at 25 frames a second
     const after = (await json<{ drop: DropView }>(await lead.get(`/api/drops/${dropIds[0]}`), 200)).drop;
@@ -60,7 +63,15 @@ describe("a lead rules on a discrepancy", () => {
   });
 
   it("a third reading is looked up in the clip's frame index and becomes the drop's time", async () => {
-    const { ruling } = await json<{ ruling: RulingView }>(await rule(lead, dropIds[1], { chosen: "third", dispenseFrame: 2, clearFrame: 27, reason: "Read again frame by frame: neither reading's clear mark holds." }), 201);
+    const { ruling } = await json<{ ruling: RulingView }>(
+      await rule(lead, dropIds[1], {
+        chosen: "third",
+        dispenseFrame: 2,
+        clearFrame: 27,
+        reason: "Read again frame by frame: neither reading's clear mark holds.",
+      }),
+      201,
+    );
     expect(ruling.timeS).toBeCloseTo(25 / 25, 9);
     const third = await db()("readings").where({ id: ruling.readingId }).first();
     expect(third).toMatchObject({ slot: 3, status: "submitted", dispense_frame: 2, clear_frame: 27 });
@@ -74,7 +85,9 @@ describe("a lead rules on a discrepancy", () => {
     expect(await message(await rule(tech, dropIds[2], { chosen: "first", reason: "A technician's attempt at a ruling." }), 403)).toMatch(/lead/);
     expect(await message(await rule(lead, dropIds[0], { chosen: "first", reason: "A second ruling on the same drop." }), 409)).toMatch(/already ruled/);
     expect(await message(await rule(lead, dropIds[3], { chosen: "first", reason: "This drop has not been read at all." }), 409)).toMatch(/unread/);
-    expect(await message(await rule(party, dropIds[2], { chosen: "second", reason: "I read it and think I was right." }), 403)).toMatch(/another lead must rule/);
+    expect(await message(await rule(party, dropIds[2], { chosen: "second", reason: "I read it and think I was right." }), 403)).toMatch(
+      /another lead must rule/,
+    );
     expect(await message(await rule(otherLead, dropIds[2], { chosen: "third", reason: "Third reading without its marks." }), 422)).toBeTruthy();
     expect((await db()("drops").where({ id: dropIds[2] }).first()).state).toBe("discrepancy");
     await json(await rule(otherLead, dropIds[2], { chosen: "first", reason: "The first reader's clear frame is where the film is gone." }), 201);

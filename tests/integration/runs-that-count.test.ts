@@ -160,7 +160,12 @@ describe("voiding a run", () => {
     expect(await message(await voidRun(lead, mistake, "short"), 422)).toBeTruthy();
     expect(await message(await voidRun(tech, mistake, "Recorded on the wrong ball by mistake."), 403)).toBeTruthy();
     const run = (await json<{ run: RunDetail }>(await voidRun(lead, mistake, "Recorded on the wrong ball by mistake."), 200)).run;
-    expect(run).toMatchObject({ voidReason: "Recorded on the wrong ball by mistake.", voidedBy: expect.any(String), voidedByName: expect.any(String), voidedAt: expect.any(String) });
+    expect(run).toMatchObject({
+      voidReason: "Recorded on the wrong ball by mistake.",
+      voidedBy: expect.any(String),
+      voidedByName: expect.any(String),
+      voidedAt: expect.any(String),
+    });
     expect((await results()).balls.find((x) => x.serial === "RC-2")?.runId).toBe(secondBallRun);
     // Nothing is deleted: the run and its drops stay, and the change is in the audit trail.
     expect(await db()("drops").where({ run_id: mistake })).toHaveLength(3);

@@ -26,8 +26,14 @@ beforeAll(async () => {
   lead = await signedIn(demo.email("lead"), demo.password);
   tech = await signedIn(demo.email("technician"), demo.password);
   contactEmail = uniqueEmail("contact");
-  const org = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Requests maker (invented)"), contactEmails: [contactEmail] }), 201)).organisation;
-  const other = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Other maker (invented)") }), 201)).organisation;
+  const org = (
+    await json<{ organisation: { id: string } }>(
+      await lead.post("/api/organisations", { name: uniqueName("Requests maker (invented)"), contactEmails: [contactEmail] }),
+      201,
+    )
+  ).organisation;
+  const other = (await json<{ organisation: { id: string } }>(await lead.post("/api/organisations", { name: uniqueName("Other maker (invented)") }), 201))
+    .organisation;
   const m = await makeUser(["manufacturer"], { organisationId: org.id });
   const s = await makeUser(["manufacturer"], { organisationId: other.id });
   makerEmail = m.email;
@@ -41,7 +47,12 @@ describe("requests for more samples", () => {
 
   it("a technician asks for round 2: the submission waits for it and the manufacturer's contacts are mailed", async () => {
     const dueBy = inDays(10);
-    request = (await json<{ request: SampleRequest }>(await tech.post(`/api/submissions/${submissionId}/sample-requests`, { count: 8, weight: "15 lb", dueBy, note: "Same cover as round 1." }), 201)).request;
+    request = (
+      await json<{ request: SampleRequest }>(
+        await tech.post(`/api/submissions/${submissionId}/sample-requests`, { count: 8, weight: "15 lb", dueBy, note: "Same cover as round 1." }),
+        201,
+      )
+    ).request;
     expect(request).toMatchObject({ round: 2, count: 8, weight: "15 lb", dueBy, note: "Same cover as round 1.", acknowledgedAt: null, shippingDetails: null });
     const detail = await json<{ submission: { currentRound: number; status: string } }>(await tech.get(`/api/submissions/${submissionId}`), 200);
     expect(detail.submission).toMatchObject({ currentRound: 2, status: "awaiting_samples" });
@@ -72,7 +83,9 @@ describe("requests for more samples", () => {
     expect(byLab.message).toMatch(/manufacturer/);
     expect((await stranger.post(`/api/sample-requests/${request.id}/acknowledge`, { shippingDetails: "Parcel post" })).status).toBe(404);
     expect((await stranger.get(`/api/submissions/${submissionId}/sample-requests`)).status).toBe(404);
-    expect(await errorOf(await maker.post("/api/sample-requests/not-a-request/acknowledge", { shippingDetails: "x" }), 404)).toMatchObject({ message: "No such request." });
+    expect(await errorOf(await maker.post("/api/sample-requests/not-a-request/acknowledge", { shippingDetails: "x" }), 404)).toMatchObject({
+      message: "No such request.",
+    });
     const empty = await errorOf(await maker.post(`/api/sample-requests/${request.id}/acknowledge`, { shippingDetails: "  ", shippedOn: "not a day" }), 422);
     expect(Object.keys(empty.fields ?? {})).toEqual(expect.arrayContaining(["shippingDetails", "shippedOn"]));
   });
@@ -82,7 +95,9 @@ describe("requests for more samples", () => {
     expect(mine.requests).toEqual([expect.objectContaining({ id: request.id, count: 8, weight: "15 lb", round: 2 })]);
     const shippingDetails = "Carrier: Example Freight, tracking EF-000123 (invented), 2 boxes";
     const shippedOn = today();
-    const done = (await json<{ request: SampleRequest }>(await maker.post(`/api/sample-requests/${request.id}/acknowledge`, { shippingDetails, shippedOn }), 200)).request;
+    const done = (
+      await json<{ request: SampleRequest }>(await maker.post(`/api/sample-requests/${request.id}/acknowledge`, { shippingDetails, shippedOn }), 200)
+    ).request;
     expect(done).toMatchObject({ shippingDetails, shippedOn, acknowledgedByName: expect.any(String) });
     expect(done.acknowledgedAt).not.toBeNull();
     const seen = await json<{ requests: SampleRequest[] }>(await tech.get(`/api/submissions/${submissionId}/sample-requests`), 200);

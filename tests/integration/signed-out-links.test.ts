@@ -19,18 +19,25 @@ function pages(dir: string): string[] {
 
 /** The URL path of a page folder: route groups dropped, each [param] filled with an id. */
 function urlOf(folder: string): string {
-  const parts = path.relative(APP, folder).split(path.sep).filter((s) => !/^\(.*\)$/.test(s));
+  const parts = path
+    .relative(APP, folder)
+    .split(path.sep)
+    .filter((s) => !/^\(.*\)$/.test(s));
   return `/${parts.map((s) => (/^\[.*\]$/.test(s) ? SOME_ID : s)).join("/")}`;
 }
 
-const discovered = [
-  ...pages(path.join(APP, "(lab)")),
-  ...pages(path.join(APP, "(portal)")),
-  path.join(APP, "(shared)", "account"),
-].map(urlOf);
+const discovered = [...pages(path.join(APP, "(lab)")), ...pages(path.join(APP, "(portal)")), path.join(APP, "(shared)", "account")].map(urlOf);
 
 // Links the mails and other pages hand out, checked by name as well.
-const linked = [`/drops/${SOME_ID}`, `/drops/${SOME_ID}/ruling`, "/queue", "/discrepancies", `/audit?entity=submission&id=${SOME_ID}`, "/agreement", `/clips/${SOME_ID}`];
+const linked = [
+  `/drops/${SOME_ID}`,
+  `/drops/${SOME_ID}/ruling`,
+  "/queue",
+  "/discrepancies",
+  `/audit?entity=submission&id=${SOME_ID}`,
+  "/agreement",
+  `/clips/${SOME_ID}`,
+];
 
 async function signInTarget(target: string, cookie?: string): Promise<string | null> {
   const res = await fetch(`${APP_URL}${target}`, { redirect: "manual", headers: cookie ? { cookie } : {} });
@@ -42,7 +49,9 @@ async function signInTarget(target: string, cookie?: string): Promise<string | n
 
 describe("signed-out links keep where they were going", () => {
   it("finds the staff and portal pages on disk", () => {
-    expect(discovered).toEqual(expect.arrayContaining(["/overview", "/queue", "/discrepancies", "/audit", "/agreement", `/clips/${SOME_ID}`, "/portal", "/account"]));
+    expect(discovered).toEqual(
+      expect.arrayContaining(["/overview", "/queue", "/discrepancies", "/audit", "/agreement", `/clips/${SOME_ID}`, "/portal", "/account"]),
+    );
   });
 
   it.each([...new Set([...linked, ...discovered])])("%s goes to sign-in with the page to return to", async (target) => {

@@ -74,7 +74,16 @@ describe("signing off a submission's results", () => {
     const clipId = (await db()("drops").where({ id: drops[0] }).first()).clip_id;
     expect(await message(await tech.request("PUT", `/api/drops/${drops[0]}/placement`, { json: { clipId, startFrame: 1 } }), 409)).toBe(LOCKED(1));
     expect(await message(await lead.request("PUT", `/api/runs/${runId}`, { json: goodRun() }), 409)).toBe(LOCKED(1));
-    expect(await message(await lead.post(`/api/submissions/${submissionId}/samples`, { serial: "SO-9", weight: { value: 7000, unit: "g" }, receivedAt: new Date().toISOString() }), 409)).toBe(LOCKED(1));
+    expect(
+      await message(
+        await lead.post(`/api/submissions/${submissionId}/samples`, {
+          serial: "SO-9",
+          weight: { value: 7000, unit: "g" },
+          receivedAt: new Date().toISOString(),
+        }),
+        409,
+      ),
+    ).toBe(LOCKED(1));
     const clipsBefore = await db()("clips").where({ run_id: runId }).count<{ count: string }[]>("* as count");
     expect(await message(await tech.post(`/api/runs/${runId}/clips`, { fileName: "late.mp4", size: 1000, contentType: "video/mp4" }), 409)).toBe(LOCKED(1));
     expect(await db()("clips").where({ run_id: runId }).count<{ count: string }[]>("* as count")).toEqual(clipsBefore);
@@ -83,8 +92,15 @@ describe("signing off a submission's results", () => {
 
   it("re-opening needs a reason, starts revision 2, and the next signature records what changed", async () => {
     expect(await message(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "short" }), 422)).toBeTruthy();
-    const { signOff } = await json<{ signOff: SignOffView }>(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "A third ball arrived and is to be included." }), 201);
-    expect(signOff).toMatchObject({ revision: 2, locked: false, reopenings: [expect.objectContaining({ revision: 2, reason: "A third ball arrived and is to be included.", reopenedBy: expect.any(String) })] });
+    const { signOff } = await json<{ signOff: SignOffView }>(
+      await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "A third ball arrived and is to be included." }),
+      201,
+    );
+    expect(signOff).toMatchObject({
+      revision: 2,
+      locked: false,
+      reopenings: [expect.objectContaining({ revision: 2, reason: "A third ball arrived and is to be included.", reopenedBy: expect.any(String) })],
+    });
     expect((await json<{ signOff: unknown }>(await lead.get(`/api/submissions/${submissionId}`), 200)).signOff).toEqual({ revision: 2, locked: false });
     expect((await db()("submissions").where({ id: submissionId }).first()).status).toBe("testing");
     expect(new Set((await db()("drops").whereIn("id", drops)).map((d) => d.state))).toEqual(new Set(["agreed"]));

@@ -109,7 +109,10 @@ describe.each(VARIANTS)("synthetic clip: $name", (variant) => {
     const p = await probePacketTimes(out);
     const t = (i: number) => ticksToSeconds(p.pts[i], p.timeBase);
     for (const d of rendered.truth.drops) {
-      for (const [frame, time, pts] of [[d.dispenseFrame, d.dispenseTime, d.dispensePts], [d.clearFrame, d.clearTime, d.clearPts]] as const) {
+      for (const [frame, time, pts] of [
+        [d.dispenseFrame, d.dispenseTime, d.dispensePts],
+        [d.clearFrame, d.clearTime, d.clearPts],
+      ] as const) {
         expect(t(frame)).toBeGreaterThanOrEqual(time);
         expect(t(frame - 1)).toBeLessThan(time);
         expect(pts).toBe(p.pts[frame]);

@@ -22,7 +22,8 @@ beforeAll(async () => {
 });
 afterAll(() => closeDb());
 
-const stepState = async (clipId: string, step: string) => (await db()("clip_steps").where({ clip_id: clipId, step }).first("state", "attempts")) as { state: string; attempts: number } | undefined;
+const stepState = async (clipId: string, step: string) =>
+  (await db()("clip_steps").where({ clip_id: clipId, step }).first("state", "attempts")) as { state: string; attempts: number } | undefined;
 
 describe("a worker killed mid-job", () => {
   it("runs the job again after a restart and ends in the same state", { timeout: 180_000 }, async () => {

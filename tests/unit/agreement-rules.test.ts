@@ -99,7 +99,14 @@ describe("summariseAgreement", () => {
 
   it("plots each drop at the mean of its readings against first − second", () => {
     const s = summariseAgreement(LANCET);
-    expect(s.points[0]).toEqual({ dropId: "drop-00", submissionReference: "S-1", sampleSerial: "B1", ordinal: 1, meanS: (494 + 512) / 2, differenceS: 494 - 512 });
+    expect(s.points[0]).toEqual({
+      dropId: "drop-00",
+      submissionReference: "S-1",
+      sampleSerial: "B1",
+      ordinal: 1,
+      meanS: (494 + 512) / 2,
+      differenceS: 494 - 512,
+    });
     expect(s.points).toHaveLength(17);
   });
 
@@ -148,7 +155,10 @@ describe("reviewerBias", () => {
   });
 
   it("lists a reviewer whose drops have no agreed value yet with n = 0 and no mean", () => {
-    expect(reviewerBias([pair(1, 50, 58)]).map((r) => [r.n, r.meanS, r.sdS])).toEqual([[0, null, null], [0, null, null]]);
+    expect(reviewerBias([pair(1, 50, 58)]).map((r) => [r.n, r.meanS, r.sdS])).toEqual([
+      [0, null, null],
+      [0, null, null],
+    ]);
   });
 });
 

@@ -4,7 +4,17 @@ import { changeLines } from "@/app/(lab)/submissions/[id]/results/_components/ch
 
 describe("an audit event's before and after, field by field", () => {
   it("flattens nested records into dotted fields, lists of values joined, lists of records numbered", () => {
-    expect([...flatten({ status: "released", weight: { value: 16, unit: "lb" }, roles: ["lead", "reviewer"], balls: [{ serial: "A" }, { serial: "B" }], note: "", gone: null, none: [] })]).toEqual([
+    expect([
+      ...flatten({
+        status: "released",
+        weight: { value: 16, unit: "lb" },
+        roles: ["lead", "reviewer"],
+        balls: [{ serial: "A" }, { serial: "B" }],
+        note: "",
+        gone: null,
+        none: [],
+      }),
+    ]).toEqual([
       ["status", "released"],
       ["weight.value", "16"],
       ["weight.unit", "lb"],
@@ -43,6 +53,12 @@ describe("what changed between two signed revisions, in words", () => {
         ballsRemoved: ["SO-2"],
         decision: { before: "close to limit — more samples", after: "meets limit" },
       }),
-    ).toEqual(["Decision: close to limit — more samples → meets limit", "Balls added: SO-3", "Balls removed: SO-2", "Ball SO-1: mean 1.2 s → 1.3 s, status close → meets", "Ball SO-4: mean 1.210 s → 1.240 s"]);
+    ).toEqual([
+      "Decision: close to limit — more samples → meets limit",
+      "Balls added: SO-3",
+      "Balls removed: SO-2",
+      "Ball SO-1: mean 1.2 s → 1.3 s, status close → meets",
+      "Ball SO-4: mean 1.210 s → 1.240 s",
+    ]);
   });
 });

@@ -15,7 +15,13 @@ function fakeServer(size: number, partSize: number, opts: { recorded?: number[];
   let maxInFlight = 0;
   let completed = false;
   const transport: Transport = {
-    state: async (): Promise<UploadState> => ({ status: completed ? "processing" : "uploading", size, partSize, partCount, parts: [...recorded].map(([partNumber, s]) => ({ partNumber, size: s })) }),
+    state: async (): Promise<UploadState> => ({
+      status: completed ? "processing" : "uploading",
+      size,
+      partSize,
+      partCount,
+      parts: [...recorded].map(([partNumber, s]) => ({ partNumber, size: s })),
+    }),
     sign: async (_id, nums) => {
       signed.push(nums);
       return nums.map((n) => ({ partNumber: n, url: `store://part/${n}` }));
@@ -50,7 +56,20 @@ function fakeServer(size: number, partSize: number, opts: { recorded?: number[];
       return { status: "processing" };
     },
   };
-  return { transport, recorded, puts, started, signed, tries, get maxInFlight() { return maxInFlight; }, get completed() { return completed; } };
+  return {
+    transport,
+    recorded,
+    puts,
+    started,
+    signed,
+    tries,
+    get maxInFlight() {
+      return maxInFlight;
+    },
+    get completed() {
+      return completed;
+    },
+  };
 }
 
 const file = (bytes: number) => new Blob([new Uint8Array(bytes)]);
@@ -60,9 +79,21 @@ describe("sendFile", () => {
   it("sends every part three at a time, with the right byte ranges, then completes", async () => {
     const s = fakeServer(23, 5);
     const progress: number[] = [];
-    const out = await sendFile({ clipId: "c", file: file(23), transport: s.transport, signal: new AbortController().signal, onProgress: (p) => progress.push(p.sentBytes) });
+    const out = await sendFile({
+      clipId: "c",
+      file: file(23),
+      transport: s.transport,
+      signal: new AbortController().signal,
+      onProgress: (p) => progress.push(p.sentBytes),
+    });
     expect(out.status).toBe("processing");
-    expect([...s.recorded.entries()].sort((a, b) => a[0] - b[0])).toEqual([[1, 5], [2, 5], [3, 5], [4, 5], [5, 3]]);
+    expect([...s.recorded.entries()].sort((a, b) => a[0] - b[0])).toEqual([
+      [1, 5],
+      [2, 5],
+      [3, 5],
+      [4, 5],
+      [5, 3],
+    ]);
     expect(s.maxInFlight).toBe(3);
     expect(progress.at(-1)).toBe(23);
     // Signed in one batch for the part wanted and the queue behind it.
@@ -87,7 +118,9 @@ describe("sendFile", () => {
 
   it("gives up on a part after the last try and says which, without completing", async () => {
     const s = fakeServer(15, 5, { failPut: (n) => (n === 3 ? new PartError("The connection to storage was lost.", true) : null) });
-    await expect(sendFile({ clipId: "c", file: file(15), transport: s.transport, signal: new AbortController().signal, maxAttempts: 3, ...fast })).rejects.toThrow(/Part 3 of 3 could not be sent after 3 tries \(The connection to storage was lost\.\)/);
+    await expect(
+      sendFile({ clipId: "c", file: file(15), transport: s.transport, signal: new AbortController().signal, maxAttempts: 3, ...fast }),
+    ).rejects.toThrow(/Part 3 of 3 could not be sent after 3 tries \(The connection to storage was lost\.\)/);
     expect([...s.recorded.keys()].sort()).toEqual([1, 2]);
     expect(s.completed).toBe(false);
   });
@@ -102,9 +135,20 @@ describe("sendFile", () => {
     let online = false;
     let wake: () => void = () => {};
     const network: Network = { isOnline: () => online, whenOnline: () => new Promise<void>((r) => (wake = r)) };
-    const s = fakeServer(10, 5, { failPut: (n, attempt) => (n === 1 && attempt <= 4 && !online ? new PartError("The connection to storage was lost.", true) : null) });
+    const s = fakeServer(10, 5, {
+      failPut: (n, attempt) => (n === 1 && attempt <= 4 && !online ? new PartError("The connection to storage was lost.", true) : null),
+    });
     const states: string[] = [];
-    const done = sendFile({ clipId: "c", file: file(10), transport: s.transport, signal: new AbortController().signal, network, maxAttempts: 2, ...fast, onProgress: (p) => p.waiting && states.push(p.waiting.kind) });
+    const done = sendFile({
+      clipId: "c",
+      file: file(10),
+      transport: s.transport,
+      signal: new AbortController().signal,
+      network,
+      maxAttempts: 2,
+      ...fast,
+      onProgress: (p) => p.waiting && states.push(p.waiting.kind),
+    });
     await new Promise((r) => setTimeout(r, 20));
     expect(states).toContain("offline");
     online = true;
@@ -197,7 +241,10 @@ describe("SignedUrls", () => {
   it("signs in batches, reuses fresh URLs, and signs again after 45 minutes or when told to forget", async () => {
     let now = 0;
     const asked: number[][] = [];
-    const urls = new SignedUrls(async (nums) => (asked.push(nums), nums.map((n) => ({ partNumber: n, url: `u${n}@${now}` }))), () => now);
+    const urls = new SignedUrls(
+      async (nums) => (asked.push(nums), nums.map((n) => ({ partNumber: n, url: `u${n}@${now}` }))),
+      () => now,
+    );
     expect(await urls.get(1, [2, 3])).toBe("u1@0");
     expect(await urls.get(2, [3])).toBe("u2@0");
     expect(asked).toEqual([[1, 2, 3]]);

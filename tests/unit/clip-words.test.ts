@@ -38,13 +38,23 @@ describe("the frame index in words", () => {
 });
 
 describe("the proxy decision in words", () => {
-  const steps = (state: ClipView["steps"][number]["state"], reason: string | null = null): ClipView["steps"] => [{ step: "proxy", label: "Stepping proxy", state, attempts: 1, reason }];
+  const steps = (state: ClipView["steps"][number]["state"], reason: string | null = null): ClipView["steps"] => [
+    { step: "proxy", label: "Stepping proxy", state, attempts: 1, reason },
+  ];
   it("says why a proxy was made, or why none is needed", () => {
-    expect(proxyDecision({ proxyReason: "Made because B-frames make some frames unreachable when stepping.", playback: { url: "u", isProxy: true, offsetPts: 0 }, steps: steps("done") })).toBe(
-      "A stepping proxy was made because B-frames make some frames unreachable when stepping.",
+    expect(
+      proxyDecision({
+        proxyReason: "Made because B-frames make some frames unreachable when stepping.",
+        playback: { url: "u", isProxy: true, offsetPts: 0 },
+        steps: steps("done"),
+      }),
+    ).toBe("A stepping proxy was made because B-frames make some frames unreachable when stepping.");
+    expect(proxyDecision({ proxyReason: "the original steps well in a browser: H.264 in MP4", playback: null, steps: steps("skipped") })).toBe(
+      "No stepping proxy is needed: the original steps well in a browser: H.264 in MP4.",
     );
-    expect(proxyDecision({ proxyReason: "the original steps well in a browser: H.264 in MP4", playback: null, steps: steps("skipped") })).toBe("No stepping proxy is needed: the original steps well in a browser: H.264 in MP4.");
-    expect(proxyDecision({ proxyReason: null, playback: null, steps: steps("failed", "The stepping proxy was refused because frame 3 is missing.") })).toBe("The stepping proxy was refused because frame 3 is missing.");
+    expect(proxyDecision({ proxyReason: null, playback: null, steps: steps("failed", "The stepping proxy was refused because frame 3 is missing.") })).toBe(
+      "The stepping proxy was refused because frame 3 is missing.",
+    );
     expect(proxyDecision({ proxyReason: null, playback: null, steps: steps("pending") })).toBeNull();
   });
 });

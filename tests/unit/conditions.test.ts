@@ -37,11 +37,9 @@ describe("conditionFlags", () => {
   });
 
   it("raises every flag that applies at once", () => {
-    expect(conditionFlags(limits, { testedAt: hoursLater(2), acclimationStartedAt: start, surfaceTempC: 30, roughnessRaUm: [0.1, 0.9] }).map((f) => f.code)).toEqual([
-      "acclimation_short",
-      "surface_temp",
-      "roughness_spread",
-    ]);
+    expect(
+      conditionFlags(limits, { testedAt: hoursLater(2), acclimationStartedAt: start, surfaceTempC: 30, roughnessRaUm: [0.1, 0.9] }).map((f) => f.code),
+    ).toEqual(["acclimation_short", "surface_temp", "roughness_spread"]);
   });
 });
 

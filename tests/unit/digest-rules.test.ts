@@ -30,7 +30,14 @@ describe("what a digest says", () => {
 
   it("counts per submission, oldest first, and names the oldest wait", () => {
     const s = summariseWaiting(drops)!;
-    expect(s).toEqual({ waiting: 3, oldest: at("2026-11-30T08:15:00Z"), submissions: [{ submissionId: "a", reference: "D-2026-0002", count: 1 }, { submissionId: "b", reference: "D-2026-0010", count: 2 }] });
+    expect(s).toEqual({
+      waiting: 3,
+      oldest: at("2026-11-30T08:15:00Z"),
+      submissions: [
+        { submissionId: "a", reference: "D-2026-0002", count: 1 },
+        { submissionId: "b", reference: "D-2026-0010", count: 2 },
+      ],
+    });
     const mail = reviewerDigestMail({ appUrl: "http://x.test", name: "Ada", day: "2026-12-02", ...s });
     expect(mail.subject).toBe("2026-12-02: 3 drops waiting for you to read");
     expect(mail.text).toContain("- D-2026-0002: 1 drop\n- D-2026-0010: 2 drops");

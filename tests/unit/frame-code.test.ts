@@ -52,7 +52,10 @@ describe("decodeFrameCode", () => {
 
 describe("frameCodeFilter", () => {
   // Split between filters only: the enable expressions contain commas of their own.
-  const filters = (w: number, h: number) => frameCodeFilter(w, h).split(",drawbox=").map((f, i) => (i === 0 ? f : `drawbox=${f}`));
+  const filters = (w: number, h: number) =>
+    frameCodeFilter(w, h)
+      .split(",drawbox=")
+      .map((f, i) => (i === 0 ? f : `drawbox=${f}`));
   const chain = filters(1920, 1080);
 
   it("draws a black strip with padding, then one white box per bit", () => {

@@ -14,14 +14,21 @@ const source = (seconds: number) => ["-f", "lavfi", "-i", `testsrc2=size=160x90:
 const x264 = ["-c:v", "libx264", "-preset", "ultrafast", "-bf", "2", "-g", "25", "-keyint_min", "25", "-sc_threshold", "0", "-pix_fmt", "yuv420p"];
 
 function decoded(file: string, field: "best_effort_timestamp" | "pts" = "best_effort_timestamp"): { times: (number | undefined)[]; keyframes: number[] } {
-  const out = execFileSync("ffprobe", ["-v", "quiet", "-select_streams", "v:0", "-show_entries", `frame=${field},key_frame`, "-of", "json", file], { encoding: "utf8", maxBuffer: 1 << 26 });
+  const out = execFileSync("ffprobe", ["-v", "quiet", "-select_streams", "v:0", "-show_entries", `frame=${field},key_frame`, "-of", "json", file], {
+    encoding: "utf8",
+    maxBuffer: 1 << 26,
+  });
   const frames = (JSON.parse(out) as { frames: Record<string, number | undefined>[] }).frames;
   return { times: frames.map((f) => f[field]), keyframes: frames.flatMap((f, i) => (f.key_frame ? [i] : [])) };
 }
 
 function packetDts(file: string): number[] {
   const out = execFileSync("ffprobe", ["-v", "error", "-select_streams", "v:0", "-show_entries", "packet=dts", "-of", "csv=p=0", file], { encoding: "utf8" });
-  return out.split("\n").filter(Boolean).map(Number).sort((a, b) => a - b);
+  return out
+    .split("\n")
+    .filter(Boolean)
+    .map(Number)
+    .sort((a, b) => a - b);
 }
 
 const file = (name: string) => path.join(dir, name);

@@ -12,7 +12,10 @@ class FakeVideo extends EventTarget {
   private callbacks = new Map<number, VideoFrameRequestCallback>();
   private next = 1;
   private time = 0;
-  constructor(times: number[], private seekMs = 20) {
+  constructor(
+    times: number[],
+    private seekMs = 20,
+  ) {
     super();
     this.paint = (t) => [...times].reverse().find((s) => s <= t) ?? null;
   }
@@ -26,7 +29,7 @@ class FakeVideo extends EventTarget {
     setTimeout(() => {
       this.seeking = false;
       const shown = this.paint(t);
-      if (shown !== null) for (const [id, cb] of [...this.callbacks]) (this.callbacks.delete(id), cb(0, { mediaTime: shown } as VideoFrameCallbackMetadata));
+      if (shown !== null) for (const [id, cb] of [...this.callbacks]) this.callbacks.delete(id), cb(0, { mediaTime: shown } as VideoFrameCallbackMetadata);
       this.dispatchEvent(new Event("seeked"));
     }, this.seekMs);
   }
@@ -46,7 +49,11 @@ class FakeVideo extends EventTarget {
   }
 }
 
-const times = mediaTimes(Array.from({ length: 60 }, (_, i) => i * 1001), { num: 1, den: 30000 }, 0);
+const times = mediaTimes(
+  Array.from({ length: 60 }, (_, i) => i * 1001),
+  { num: 1, den: 30000 },
+  0,
+);
 let video: FakeVideo;
 let states: SeekerState[];
 let seeker: FrameSeeker;

@@ -13,12 +13,55 @@ const hrefs = (html: string) => [...html.matchAll(/<a href="([^"]+)">/g)].map((m
 const unlinked = (html: string) => html.replace(/<a [^>]*>.*?<\/a>/g, "").replace(/<[^>]+>/g, " ");
 
 const mails: [string, { text: string; html?: string }, string[]][] = [
-  ["discrepancy", discrepancyMail({ appUrl: APP, dropId: ID, reference: "D-1", sampleSerial: "S-1", ordinal: 2, differenceS: 1.5 }), [`${APP}/drops/${ID}`, `${APP}/account`]],
-  ["below the limit", belowLimitMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", judged: "mean", balls: [{ serial: "S-1", value: "12.3 s" }], limit: "15.0 s", decides: true }), [`${APP}/portal/submissions/${ID}`, `${APP}/account`]],
-  ["samples requested", samplesRequestedMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", round: 2, count: 3, weight: "15 lb", dueBy: "2027-01-31", note: "Ship in the lab's own boxes." }), [`${APP}/portal/submissions/${ID}`, `${APP}/account`]],
-  ["results released", resultsReleasedMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", revision: 2 }), [`${APP}/api/submissions/${ID}/report.pdf`, `${APP}/portal/submissions/${ID}`, `${APP}/account`]],
-  ["reviewer digest", reviewerDigestMail({ appUrl: APP, name: "Reader", day: "2026-12-05", waiting: 2, submissions: [{ reference: "D-1", count: 2 }], oldest: null }), [`${APP}/queue`, `${APP}/account`]],
-  ["invitation", inviteMail({ to: "a@example.test", name: "New", invitedBy: "Lead", link: `${APP}/invite/abc-DEF_123`, expiresAt: new Date("2027-01-01T10:00:00Z") }), [`${APP}/invite/abc-DEF_123`]],
+  [
+    "discrepancy",
+    discrepancyMail({ appUrl: APP, dropId: ID, reference: "D-1", sampleSerial: "S-1", ordinal: 2, differenceS: 1.5 }),
+    [`${APP}/drops/${ID}`, `${APP}/account`],
+  ],
+  [
+    "below the limit",
+    belowLimitMail({
+      appUrl: APP,
+      submissionId: ID,
+      reference: "D-1",
+      modelName: "Model",
+      judged: "mean",
+      balls: [{ serial: "S-1", value: "12.3 s" }],
+      limit: "15.0 s",
+      decides: true,
+    }),
+    [`${APP}/portal/submissions/${ID}`, `${APP}/account`],
+  ],
+  [
+    "samples requested",
+    samplesRequestedMail({
+      appUrl: APP,
+      submissionId: ID,
+      reference: "D-1",
+      modelName: "Model",
+      round: 2,
+      count: 3,
+      weight: "15 lb",
+      dueBy: "2027-01-31",
+      note: "Ship in the lab's own boxes.",
+    }),
+    [`${APP}/portal/submissions/${ID}`, `${APP}/account`],
+  ],
+  [
+    "results released",
+    resultsReleasedMail({ appUrl: APP, submissionId: ID, reference: "D-1", modelName: "Model", revision: 2 }),
+    [`${APP}/api/submissions/${ID}/report.pdf`, `${APP}/portal/submissions/${ID}`, `${APP}/account`],
+  ],
+  [
+    "reviewer digest",
+    reviewerDigestMail({ appUrl: APP, name: "Reader", day: "2026-12-05", waiting: 2, submissions: [{ reference: "D-1", count: 2 }], oldest: null }),
+    [`${APP}/queue`, `${APP}/account`],
+  ],
+  [
+    "invitation",
+    inviteMail({ to: "a@example.test", name: "New", invitedBy: "Lead", link: `${APP}/invite/abc-DEF_123`, expiresAt: new Date("2027-01-01T10:00:00Z") }),
+    [`${APP}/invite/abc-DEF_123`],
+  ],
 ];
 
 describe("links in mails", () => {

@@ -22,7 +22,15 @@ describe("parseProbeLine", () => {
 
 describe("toDisplayOrder", () => {
   it("sorts B-frame packets by pts and reports key frames by display index (mp4, edit list)", () => {
-    const p = packets(["packet,0,-2002,K_", "packet,4004,-1001,__", "packet,2002,0,__", "packet,1001,1001,__", "packet,3003,2002,__", "packet,6006,3003,K_", "packet,5005,4004,__"]);
+    const p = packets([
+      "packet,0,-2002,K_",
+      "packet,4004,-1001,__",
+      "packet,2002,0,__",
+      "packet,1001,1001,__",
+      "packet,3003,2002,__",
+      "packet,6006,3003,K_",
+      "packet,5005,4004,__",
+    ]);
     expect(toDisplayOrder(p)).toEqual({ pts: [0, 1001, 2002, 3003, 4004, 5005, 6006], keyframes: [0, 6], clock: "pts" });
   });
 
@@ -52,7 +60,19 @@ describe("toDisplayOrder", () => {
 
   it("puts AVI keyframes where MPEG-4 Part 2 B-frames make them shown, not where they are stored", () => {
     // Decode order I P B B P B B I B B P: the second I is stored 7th but shown 9th (display index 9).
-    const lines = ["packet,N/A,0,K_", "packet,N/A,1,__", "packet,2,2,__", "packet,3,3,__", "packet,N/A,4,__", "packet,5,5,__", "packet,6,6,__", "packet,N/A,7,K_", "packet,8,8,__", "packet,9,9,__", "packet,N/A,10,__"];
+    const lines = [
+      "packet,N/A,0,K_",
+      "packet,N/A,1,__",
+      "packet,2,2,__",
+      "packet,3,3,__",
+      "packet,N/A,4,__",
+      "packet,5,5,__",
+      "packet,6,6,__",
+      "packet,N/A,7,K_",
+      "packet,8,8,__",
+      "packet,9,9,__",
+      "packet,N/A,10,__",
+    ];
     expect(toDisplayOrder(packets(lines))).toEqual({ pts: [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10], keyframes: [0, 9], clock: "dts" });
   });
 

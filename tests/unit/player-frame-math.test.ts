@@ -88,7 +88,11 @@ describe("one second by the frames' own times", () => {
   });
 
   it("counts 30 frames at a constant 30 fps", () => {
-    const c = mediaTimes(Array.from({ length: 100 }, (_, i) => i), { num: 1, den: 30 }, 0);
+    const c = mediaTimes(
+      Array.from({ length: 100 }, (_, i) => i),
+      { num: 1, den: 30 },
+      0,
+    );
     expect(frameAfterSeconds(c, 10, 1)).toBe(40);
     expect(frameAfterSeconds(c, 40, -1)).toBe(10);
   });

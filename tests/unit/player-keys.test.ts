@@ -2,7 +2,14 @@ import { describe, expect, it } from "vitest";
 import { actionFor, keyLabel, keyMatches, nextSpeed, PLAYER_KEYS, SPEEDS } from "@/components/player/key-map";
 import { dragBy, panBy, pictureStyle, PLAIN_VIEW, withTone, withZoom, zoomStep } from "@/components/player/picture-view";
 
-const press = (key: string, mods: Partial<{ shiftKey: boolean; altKey: boolean; ctrlKey: boolean; metaKey: boolean }> = {}) => ({ key, shiftKey: false, altKey: false, ctrlKey: false, metaKey: false, ...mods });
+const press = (key: string, mods: Partial<{ shiftKey: boolean; altKey: boolean; ctrlKey: boolean; metaKey: boolean }> = {}) => ({
+  key,
+  shiftKey: false,
+  altKey: false,
+  ctrlKey: false,
+  metaKey: false,
+  ...mods,
+});
 
 describe("player keys", () => {
   it("steps by one and ten frames and by a second", () => {
@@ -28,7 +35,9 @@ describe("player keys", () => {
   it("gives every key to one action only", () => {
     const all = PLAYER_KEYS.flatMap((b) => b.keys);
     expect(new Set(all).size).toBe(all.length);
-    for (const b of PLAYER_KEYS) for (const k of b.keys) expect(actionFor(press(k.replace(/^(Shift|Alt)\+/, ""), { shiftKey: k.startsWith("Shift+"), altKey: k.startsWith("Alt+") }))).toBe(b.action);
+    for (const b of PLAYER_KEYS)
+      for (const k of b.keys)
+        expect(actionFor(press(k.replace(/^(Shift|Alt)\+/, ""), { shiftKey: k.startsWith("Shift+"), altKey: k.startsWith("Alt+") }))).toBe(b.action);
   });
 
   it("writes keys for people", () => {

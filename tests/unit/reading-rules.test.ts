@@ -71,7 +71,15 @@ describe("compareReadings", () => {
 
 describe("drop state from readings", () => {
   const tb = { num: 1, den: 1000 };
-  const r = (id: string, slot: number, dispensePts: number, clearPts: number, over: Partial<ChainReading> = {}): ChainReading => ({ id, slot, status: "submitted", supersedesId: null, dispensePts, clearPts, ...over });
+  const r = (id: string, slot: number, dispensePts: number, clearPts: number, over: Partial<ChainReading> = {}): ChainReading => ({
+    id,
+    slot,
+    status: "submitted",
+    supersedesId: null,
+    dispensePts,
+    clearPts,
+    ...over,
+  });
 
   it("counts only submitted readings, and of a chain of corrections only the latest", () => {
     expect(dropOutcome([], tb, 0.5).state).toBe("unread");
@@ -89,7 +97,10 @@ describe("drop state from readings", () => {
     expect(agreed).toMatchObject({ state: "agreed", agreement: { agreedValueS: 2.25, timeDifferenceS: 0.5 } });
     expect(dropOutcome([r("a", 1, 0, 2000), r("b", 2, 0, 2501)], tb, 0.5).state).toBe("discrepancy");
     // Same time, but both marks a second late: the marks disagree, so the readings do.
-    expect(dropOutcome([r("a", 1, 0, 2000), r("b", 2, 1000, 3000)], tb, 0.5)).toMatchObject({ state: "discrepancy", agreement: { timeDifferenceS: 0, dispenseDifferenceS: 1 } });
+    expect(dropOutcome([r("a", 1, 0, 2000), r("b", 2, 1000, 3000)], tb, 0.5)).toMatchObject({
+      state: "discrepancy",
+      agreement: { timeDifferenceS: 0, dispenseDifferenceS: 1 },
+    });
   });
 });
 

@@ -125,7 +125,9 @@ describe("the staged submission decision", () => {
   it("one ball in the guard band after round 1 asks for round 2 of 8", () => {
     const { decision } = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 141.2)], 1);
     expect(decision).toMatchObject({ decision: "close to limit — more samples", closeBalls: ["B"], nextRound: { round: 2, size: 8 } });
-    expect(decision.explanation).toBe("After round 1: 1 of 2 balls is close to the 135 s minimum, inside its 10 s guard band: B (141.2 s). Round 2 asks for 8 more samples.");
+    expect(decision.explanation).toBe(
+      "After round 1: 1 of 2 balls is close to the 135 s minimum, inside its 10 s guard band: B (141.2 s). Round 2 asks for 8 more samples.",
+    );
     expect(decision.nextAction).toBe("Request round 2: 8 more samples from the manufacturer.");
   });
 
@@ -137,7 +139,9 @@ describe("the staged submission decision", () => {
   it("waits while a ball of the round has no result or samples are missing, and still reports a ball below", () => {
     const d = submissionResults(LIMITS, [at("A", 1, 131), ball("B", 1, [150, null, 150])], 1).decision;
     expect(d).toMatchObject({ decision: "pending", pendingBalls: ["B"], belowBalls: ["A"] });
-    expect(d.explanation).toBe("Round 1: 1 of 2 balls have results. Waiting: B (2 of 3 drops settled). A (131.0 s) is below the 135 s minimum: tell the manufacturer now; testing goes on.");
+    expect(d.explanation).toBe(
+      "Round 1: 1 of 2 balls have results. Waiting: B (2 of 3 drops settled). A (131.0 s) is below the 135 s minimum: tell the manufacturer now; testing goes on.",
+    );
     const short = submissionResults(LIMITS, [at("A", 1, 150), at("B", 1, 150), at("C", 2, 150)], 2).decision;
     expect(short).toMatchObject({ decision: "pending" });
     expect(short.explanation).toContain("7 samples of round 2 not received");
@@ -156,7 +160,9 @@ describe("the staged submission decision", () => {
     expect(t.mean).toBeCloseTo(146, 10);
     expect(t.limit).toBeCloseTo(146 - t.k * t.sd, 10);
     expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "tolerance limit", finalRound: true });
-    expect(decision.explanation).toMatch(/^10 balls; lower 90 %\/95 % tolerance limit 13\d\.\d s is at or above the 135 s minimum; estimated fraction of balls below the minimum (\d+(\.\d+)?|less than 0\.01) %\.$/);
+    expect(decision.explanation).toMatch(
+      /^10 balls; lower 90 %\/95 % tolerance limit 13\d\.\d s is at or above the 135 s minimum; estimated fraction of balls below the minimum (\d+(\.\d+)?|less than 0\.01) %\.$/,
+    );
   });
 
   it("final judgement fails when the lower tolerance limit is below the minimum", () => {
@@ -174,12 +180,16 @@ describe("the staged submission decision", () => {
     const { decision } = submissionResults(every, balls, 3);
     expect(decision).toMatchObject({ decision: "meets limit", decidedBy: "tolerance limit", finalRound: true, belowBalls: ["LOW"] });
     expect(decision.explanation).toContain("LOW (134.0 s) is below the 135 s minimum");
-    expect(decision.belowNote).toBe("LOW (134.0 s) is below the 135 s minimum: the manufacturer is told; under this edition the tolerance limit of every ball decides.");
+    expect(decision.belowNote).toBe(
+      "LOW (134.0 s) is below the 135 s minimum: the manufacturer is told; under this edition the tolerance limit of every ball decides.",
+    );
     expect(decision.explanation).not.toContain("testing goes on");
     // Under the default rule the same ball fails the submission on its own.
     const fails = submissionResults({ ...every, belowMinimumRule: "fails" }, balls, 3).decision;
     expect(fails).toMatchObject({ decision: "below limit", decidedBy: "ball below the minimum", belowBalls: ["LOW"], nextRound: null });
-    expect(fails.explanation).toBe("Round 3: LOW (134.0 s) is below the 135 s minimum: under this edition a ball below the minimum fails the submission on its own.");
+    expect(fails.explanation).toBe(
+      "Round 3: LOW (134.0 s) is below the 135 s minimum: under this edition a ball below the minimum fails the submission on its own.",
+    );
   });
 
   it("under the default rule a ball below the minimum fails the submission in any round, even before the others have results", () => {

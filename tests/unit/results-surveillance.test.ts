@@ -4,7 +4,16 @@ import { compareWithApproval } from "@/lib/results/surveillance";
 import { summarize, welchInterval } from "@/lib/stats";
 
 // Market samples against the approval of the same model, on an example edition.
-const LIMITS: ResultLimits = { minAbsorptionS: 135, criterion: "ball_mean", belowMinimumRule: "fails", dropsPerBall: 3, guardBandS: 10, roundSizes: [2, 8], toleranceCoverage: 0.9, toleranceConfidence: 0.95 };
+const LIMITS: ResultLimits = {
+  minAbsorptionS: 135,
+  criterion: "ball_mean",
+  belowMinimumRule: "fails",
+  dropsPerBall: 3,
+  guardBandS: 10,
+  roundSizes: [2, 8],
+  toleranceCoverage: 0.9,
+  toleranceConfidence: 0.95,
+};
 
 let seq = 0;
 const ball = (serial: string, mean: number | null): BallInput => ({
@@ -13,7 +22,14 @@ const ball = (serial: string, mean: number | null): BallInput => ({
   round: 1,
   weightG: 7000,
   run: { id: `r-${serial}`, needsAcceptance: false },
-  drops: [mean, mean, mean].map((t, i) => ({ id: `d${++seq}`, ordinal: i + 1, settled: t !== null, timeS: t === null ? null : t + (i - 1) * 0.3, uncertaintyS: 0.07, readers: [] })),
+  drops: [mean, mean, mean].map((t, i) => ({
+    id: `d${++seq}`,
+    ordinal: i + 1,
+    settled: t !== null,
+    timeS: t === null ? null : t + (i - 1) * 0.3,
+    uncertaintyS: 0.07,
+    readers: [],
+  })),
 });
 const results = (means: (number | null)[]) => means.map((m, i) => ballResult(ball(`B${i}`, m), LIMITS));
 const APPROVAL_MEANS = [141, 142, 143, 145, 146, 146, 147, 149, 150, 151];
@@ -29,7 +45,9 @@ describe("surveillance against the approval", () => {
     expect(c.difference!.lower).toBeCloseTo(w.lower, 10);
     expect(c.difference!.upper).toBeCloseTo(w.upper, 10);
     expect(c.stillMeets).toBe(true);
-    expect(c.explanation).toMatch(/^Market samples \(5 balls\) average 151\.4 s, 5\.4 s above the approval's 146\.0 s \(95 % Welch interval [\d.]+ to [\d.]+ s\)\. Lower 90 %\/95 % tolerance limit of the market samples [\d.]+ s is at or above the 135 s minimum: the market samples still meet the limit\.$/);
+    expect(c.explanation).toMatch(
+      /^Market samples \(5 balls\) average 151\.4 s, 5\.4 s above the approval's 146\.0 s \(95 % Welch interval [\d.]+ to [\d.]+ s\)\. Lower 90 %\/95 % tolerance limit of the market samples [\d.]+ s is at or above the 135 s minimum: the market samples still meet the limit\.$/,
+    );
   });
 
   it("says when the market samples no longer meet the limit", () => {

@@ -41,10 +41,43 @@ describe("navFor", () => {
     const labels = (roles: Parameters<typeof navFor>[0], dev = true) => navFor(roles, dev).map((i) => i.label);
     expect(labels(["technician"])).toEqual(["Overview", "Submissions", "Editions", "Help"]);
     expect(labels(["reviewer"])).toEqual(["Overview", "Submissions", "Reading queue", "Help"]);
-    expect(labels(["lead"])).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Outbox", "Help"]);
-    expect(labels(["lead"], false)).toEqual(["Overview", "Submissions", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Help"]);
+    expect(labels(["lead"])).toEqual([
+      "Overview",
+      "Submissions",
+      "Discrepancies",
+      "Reviewer agreement",
+      "Editions",
+      "Organisations",
+      "Users",
+      "Audit",
+      "Outbox",
+      "Help",
+    ]);
+    expect(labels(["lead"], false)).toEqual([
+      "Overview",
+      "Submissions",
+      "Discrepancies",
+      "Reviewer agreement",
+      "Editions",
+      "Organisations",
+      "Users",
+      "Audit",
+      "Help",
+    ]);
     expect(labels(["reviewer", "technician"])).toEqual(["Overview", "Submissions", "Reading queue", "Editions", "Help"]);
-    expect(labels(["lead", "reviewer"])).toEqual(["Overview", "Submissions", "Reading queue", "Discrepancies", "Reviewer agreement", "Editions", "Organisations", "Users", "Audit", "Outbox", "Help"]);
+    expect(labels(["lead", "reviewer"])).toEqual([
+      "Overview",
+      "Submissions",
+      "Reading queue",
+      "Discrepancies",
+      "Reviewer agreement",
+      "Editions",
+      "Organisations",
+      "Users",
+      "Audit",
+      "Outbox",
+      "Help",
+    ]);
     expect(labels(["manufacturer"])).toEqual(["Our submissions", "Help"]);
   });
 });

@@ -15,7 +15,10 @@ describe("parseSampleCsv", () => {
 
   it("reads a file without a header as serial, weight in the chosen unit", () => {
     const r = parseSampleCsv("X1,256\r\nX2,255.5\r\n", "oz");
-    expect(r.ok && r.rows.map((x) => [x.line, x.serial, x.weightG])).toEqual([[1, "X1", 7257.48], [2, "X2", 7243.3]]);
+    expect(r.ok && r.rows.map((x) => [x.line, x.serial, x.weightG])).toEqual([
+      [1, "X1", 7257.48],
+      [2, "X2", 7243.3],
+    ]);
   });
 
   it("reads dates, quoted fields and a byte-order mark", () => {
@@ -28,7 +31,9 @@ describe("parseSampleCsv", () => {
   });
 
   it("reports every bad row with its line number and reason", () => {
-    const csv = ["serial,weight,unit,received_at", ",7000,g,", "B,heavy,g,", "C,7000,stone,", "D,0,g,", "E,7000,g,yesterday", "F,7000,g,", "f,7001,g,"].join("\n");
+    const csv = ["serial,weight,unit,received_at", ",7000,g,", "B,heavy,g,", "C,7000,stone,", "D,0,g,", "E,7000,g,yesterday", "F,7000,g,", "f,7001,g,"].join(
+      "\n",
+    );
     const r = parseSampleCsv(csv, "g");
     expect(r).toEqual({
       ok: false,
@@ -44,7 +49,10 @@ describe("parseSampleCsv", () => {
   });
 
   it("refuses an empty file and a header without weights", () => {
-    expect(parseSampleCsv("\n\n", "g")).toEqual({ ok: false, errors: [{ line: 1, reason: "The CSV is empty: give one row per sample with its serial and weight." }] });
+    expect(parseSampleCsv("\n\n", "g")).toEqual({
+      ok: false,
+      errors: [{ line: 1, reason: "The CSV is empty: give one row per sample with its serial and weight." }],
+    });
     const r = parseSampleCsv("serial,mass\nA,1\n", "g");
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.errors[0]).toEqual({ line: 1, reason: "The header has no weight column." });

@@ -89,12 +89,14 @@ describe("blandAltman", () => {
   });
 
   it("mirrors when the methods swap (property)", () => {
-    const pair = fc.integer({ min: 2, max: 30 }).chain((n) =>
-      fc.tuple(
-        fc.array(fc.double({ min: 0, max: 1000, noNaN: true }), { minLength: n, maxLength: n }),
-        fc.array(fc.double({ min: 0, max: 1000, noNaN: true }), { minLength: n, maxLength: n }),
-      ),
-    );
+    const pair = fc
+      .integer({ min: 2, max: 30 })
+      .chain((n) =>
+        fc.tuple(
+          fc.array(fc.double({ min: 0, max: 1000, noNaN: true }), { minLength: n, maxLength: n }),
+          fc.array(fc.double({ min: 0, max: 1000, noNaN: true }), { minLength: n, maxLength: n }),
+        ),
+      );
     fc.assert(
       fc.property(pair, ([a, b]) => {
         const ab = blandAltman(a, b);

@@ -70,10 +70,15 @@ describe("noncentral t CDF", () => {
   });
   it("rises with t for large noncentralities too (property)", () => {
     fc.assert(
-      fc.property(fc.double({ min: 20, max: 200, noNaN: true }), fc.double({ min: 0.01, max: 20, noNaN: true }), fc.integer({ min: 10, max: 2000 }), (t, dt, df) => {
-        const delta = 37 + (t % 100);
-        expect(nonCentralTCdf(t + dt, df, delta)).toBeGreaterThanOrEqual(nonCentralTCdf(t, df, delta) - 1e-14);
-      }),
+      fc.property(
+        fc.double({ min: 20, max: 200, noNaN: true }),
+        fc.double({ min: 0.01, max: 20, noNaN: true }),
+        fc.integer({ min: 10, max: 2000 }),
+        (t, dt, df) => {
+          const delta = 37 + (t % 100);
+          expect(nonCentralTCdf(t + dt, df, delta)).toBeGreaterThanOrEqual(nonCentralTCdf(t, df, delta) - 1e-14);
+        },
+      ),
       { numRuns: 100 },
     );
   });

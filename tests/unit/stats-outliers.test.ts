@@ -35,7 +35,12 @@ describe("dixonQ", () => {
 
   it("refuses sizes and confidences outside the table", () => {
     expect(() => dixonQ([1, 2], 0.95)).toThrow(/at least 3 values/);
-    expect(() => dixonQ(Array.from({ length: 11 }, (_, i) => i), 0.95)).toThrow(/3 to 10 values/);
+    expect(() =>
+      dixonQ(
+        Array.from({ length: 11 }, (_, i) => i),
+        0.95,
+      ),
+    ).toThrow(/3 to 10 values/);
     expect(() => dixonQ([1, 2, 3], 0.8)).toThrow(/0.90, 0.95 or 0.99/);
     expect(() => dixonQ([4, 4, 4], 0.95)).toThrow(/not all equal/);
   });
@@ -69,13 +74,19 @@ describe("grubbs (two-sided)", () => {
 
   it("G never exceeds (n − 1)/√n (property; ISO 5725-2 note)", () => {
     fc.assert(
-      fc.property(fc.array(fc.integer({ min: -10_000, max: 10_000 }).map((v) => v / 10), { minLength: 3, maxLength: 30 }), (xs) => {
-        fc.pre(new Set(xs).size > 1);
-        const n = xs.length;
-        const { g, critical } = grubbs(xs, 0.05);
-        expect(g).toBeLessThanOrEqual(((n - 1) / Math.sqrt(n)) * (1 + 1e-12));
-        expect(critical).toBeLessThan((n - 1) / Math.sqrt(n));
-      }),
+      fc.property(
+        fc.array(
+          fc.integer({ min: -10_000, max: 10_000 }).map((v) => v / 10),
+          { minLength: 3, maxLength: 30 },
+        ),
+        (xs) => {
+          fc.pre(new Set(xs).size > 1);
+          const n = xs.length;
+          const { g, critical } = grubbs(xs, 0.05);
+          expect(g).toBeLessThanOrEqual(((n - 1) / Math.sqrt(n)) * (1 + 1e-12));
+          expect(critical).toBeLessThan((n - 1) / Math.sqrt(n));
+        },
+      ),
       { numRuns: 80 },
     );
   });

@@ -27,7 +27,11 @@ describe("welchInterval", () => {
   });
 
   it("is antisymmetric when the samples swap, and widens with confidence (property)", () => {
-    const summary = fc.record({ n: fc.integer({ min: 2, max: 40 }), mean: fc.double({ min: 100, max: 200, noNaN: true }), sd: fc.double({ min: 0.1, max: 20, noNaN: true }) });
+    const summary = fc.record({
+      n: fc.integer({ min: 2, max: 40 }),
+      mean: fc.double({ min: 100, max: 200, noNaN: true }),
+      sd: fc.double({ min: 0.1, max: 20, noNaN: true }),
+    });
     fc.assert(
       fc.property(summary, summary, (a, b) => {
         const ab = welchInterval(a, b, 0.95);

@@ -6,11 +6,17 @@ describe("the test totals line", () => {
   const file = (status: string, ...tests: string[]) => ({ status, assertionResults: tests.map((s) => ({ status: s })) });
 
   it("adds the failed tests of every file", () => {
-    expect(totalsOf({ numPassedTests: 3, numFailedTests: 1, testResults: [file("passed", "passed", "passed"), file("failed", "passed", "failed")] })).toEqual({ passed: 3, failed: 1 });
+    expect(totalsOf({ numPassedTests: 3, numFailedTests: 1, testResults: [file("passed", "passed", "passed"), file("failed", "passed", "failed")] })).toEqual({
+      passed: 3,
+      failed: 1,
+    });
   });
 
   it("counts a file that did not load as one failure", () => {
-    expect(totalsOf({ numPassedTests: 2, numFailedTests: 0, testResults: [file("passed", "passed", "passed"), file("failed")] })).toEqual({ passed: 2, failed: 1 });
+    expect(totalsOf({ numPassedTests: 2, numFailedTests: 0, testResults: [file("passed", "passed", "passed"), file("failed")] })).toEqual({
+      passed: 2,
+      failed: 1,
+    });
   });
 
   it("counts a file whose beforeAll threw, its tests skipped, as one failure", () => {

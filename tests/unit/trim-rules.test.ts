@@ -108,11 +108,29 @@ describe("what a trimmed clip really holds", () => {
     // The clip keeps the original's timestamps: 10.5 s (the original's first frame) + 0 s to + 7.04 s, in a 1/12800 time base.
     const kept = trimKept(trim, { firstPts: 10.5 * 12800, lastPts: 17.54 * 12800, timeBase: { num: 1, den: 12800 } });
     expect(kept).toMatchObject({ keptFirstS: 0, keptLastS: 7.04 });
-    expect(kept.note).toBe("Trimmed in the browser from run 3.mp4: asked for 1 s to 7 s; kept the frames shown from 0 s to 7.04 s of the original. It starts before the start asked for because a copy without re-encoding must begin at a keyframe.");
-    expect(trimKept(trim, null).note).toBe("Trimmed in the browser from run 3.mp4: asked for 1 s to 7 s; what was kept is known once the frame index is built.");
+    expect(kept.note).toBe(
+      "Trimmed in the browser from run 3.mp4: asked for 1 s to 7 s; kept the frames shown from 0 s to 7.04 s of the original. It starts before the start asked for because a copy without re-encoding must begin at a keyframe.",
+    );
+    expect(trimKept(trim, null).note).toBe(
+      "Trimmed in the browser from run 3.mp4: asked for 1 s to 7 s; what was kept is known once the frame index is built.",
+    );
   });
 
   it("copies with the original's timestamps kept", () => {
-    expect(trimArgs("in.mp4", "out.mp4", 1, 7.02)).toEqual(["-hide_banner", "-ss", "1", "-to", "7.020000", "-i", "in.mp4", "-c", "copy", "-map", "0", "-copyts", "out.mp4"]);
+    expect(trimArgs("in.mp4", "out.mp4", 1, 7.02)).toEqual([
+      "-hide_banner",
+      "-ss",
+      "1",
+      "-to",
+      "7.020000",
+      "-i",
+      "in.mp4",
+      "-c",
+      "copy",
+      "-map",
+      "0",
+      "-copyts",
+      "out.mp4",
+    ]);
   });
 });

@@ -14,8 +14,8 @@ export default async function AgreementPage({ searchParams }: { searchParams: Pr
       <div>
         <h1 className="text-3xl font-bold">Reviewer agreement</h1>
         <p className="mt-1 max-w-3xl text-ink-600">
-          How closely the two blind readings of the same drops agree, over the drops whose second reading was submitted in
-          the period. Drops still being read are not counted.
+          How closely the two blind readings of the same drops agree, over the drops whose second reading was submitted in the period. Drops still being read
+          are not counted.
         </p>
       </div>
       <Caution />

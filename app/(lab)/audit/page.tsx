@@ -18,8 +18,8 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <div>
         <h1 className="text-3xl font-bold">Audit</h1>
         <p className="mt-1 max-w-3xl text-ink-600">
-          Every change to the lab&apos;s records, every sign-in and every sign-off, newest first, with what the record held before and after.
-          The log cannot be edited or deleted.
+          Every change to the lab&apos;s records, every sign-in and every sign-off, newest first, with what the record held before and after. The log cannot be
+          edited or deleted.
         </p>
       </div>
       <AuditView filters={filters} />

@@ -14,7 +14,8 @@ export default async function EditionsPage() {
         <div>
           <h1 className="text-3xl font-bold">Specification editions</h1>
           <p className="mt-1 max-w-3xl text-ink-600">
-            Each submission is judged against the edition in force on the day it was received. Once a submission uses an edition, the edition cannot change; a new edition is made instead.
+            Each submission is judged against the edition in force on the day it was received. Once a submission uses an edition, the edition cannot change; a
+            new edition is made instead.
           </p>
         </div>
         {hasRole(actor, "lead") && <ButtonLink href="/editions/new">New edition</ButtonLink>}

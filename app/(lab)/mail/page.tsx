@@ -14,14 +14,17 @@ export default async function SentMailPage() {
       <div className="space-y-2">
         <h1 className="text-3xl font-bold">Sent mail</h1>
         <p className="text-ink-800">
-          Each notice is written when its event happens and sent by the worker, which retries while the mail server is unreachable.
-          A message that keeps failing stops after its last attempt and stays here as failed, with the error.
+          Each notice is written when its event happens and sent by the worker, which retries while the mail server is unreachable. A message that keeps failing
+          stops after its last attempt and stays here as failed, with the error.
         </p>
       </div>
       {outboxEnabled() && (
         <Notice>
           Development: the local mail fake receives these messages; read them as delivered on the{" "}
-          <Link href="/outbox" className="font-semibold underline">Outbox</Link> page.
+          <Link href="/outbox" className="font-semibold underline">
+            Outbox
+          </Link>{" "}
+          page.
         </Notice>
       )}
       <MailTable />

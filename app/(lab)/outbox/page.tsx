@@ -12,9 +12,7 @@ export default async function OutboxPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-3xl font-bold">Outbox</h1>
-      <Notice>
-        Development only: these are the messages the local mail fake received. With a real SMTP server configured this page does not exist.
-      </Notice>
+      <Notice>Development only: these are the messages the local mail fake received. With a real SMTP server configured this page does not exist.</Notice>
       <OutboxList />
     </div>
   );

@@ -14,8 +14,8 @@ export default async function PortalPage() {
         <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">{organisation?.name}</p>
         <h1 className="text-3xl font-bold">Our submissions</h1>
         <p className="mt-1 text-ink-600">
-          Each ball model the laboratory has received from {organisation?.name ?? "your organisation"}, with its status and current round.
-          You only ever see your own organisation&apos;s records.
+          Each ball model the laboratory has received from {organisation?.name ?? "your organisation"}, with its status and current round. You only ever see
+          your own organisation&apos;s records.
         </p>
       </div>
       <Suspense fallback={<p className="text-ink-600">Loading submissions…</p>}>

@@ -24,10 +24,14 @@ export default async function AccountPage() {
       <NotificationSettings />
       {hasRole(actor, "lead") && (
         <section aria-labelledby="lab-mail-heading" className="space-y-2">
-          <h2 id="lab-mail-heading" className="text-xl font-semibold">The lab&apos;s mail</h2>
+          <h2 id="lab-mail-heading" className="text-xl font-semibold">
+            The lab&apos;s mail
+          </h2>
           <p className="text-ink-800">
-            <Link href="/mail" className="font-semibold text-wick-700 underline">Sent mail</Link> lists every notice the lab has sent or
-            is still trying to send, with its delivery state, attempts and the last error.
+            <Link href="/mail" className="font-semibold text-wick-700 underline">
+              Sent mail
+            </Link>{" "}
+            lists every notice the lab has sent or is still trying to send, with its delivery state, attempts and the last error.
           </p>
         </section>
       )}

@@ -36,7 +36,10 @@ export async function trimFile(file: File, start: number, end: number, onLog: (l
     const data = await ffmpeg.readFile(output);
     await ffmpeg.deleteFile(output).catch(() => undefined);
     if (typeof data === "string" || data.length === 0) throw new Error("ffmpeg wrote an empty file: is the window inside the recording?");
-    const out = new File([data as Uint8Array<ArrayBuffer>], trimmedName(file.name, start, end), { type: file.type || guessType(file.name), lastModified: Date.now() });
+    const out = new File([data as Uint8Array<ArrayBuffer>], trimmedName(file.name, start, end), {
+      type: file.type || guessType(file.name),
+      lastModified: Date.now(),
+    });
     return { file: out, source: { sourceName: file.name, sourceStartS: Math.max(0, sourceStartS), requestedStartS: start, requestedEndS: end } };
   } finally {
     ffmpeg.off("log", log);

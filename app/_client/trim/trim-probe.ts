@@ -23,7 +23,19 @@ export async function packetsAround(ffmpeg: FFmpeg, input: string, end: number, 
   const from = Math.max(0, start + end - AROUND_S);
   const csv = await probeText(
     ffmpeg,
-    ["-v", "error", "-select_streams", "v:0", "-read_intervals", `${from.toFixed(3)}%${(start + end + AROUND_S).toFixed(3)}`, "-show_entries", "packet=pts_time,dts_time", "-of", "csv=p=0", input],
+    [
+      "-v",
+      "error",
+      "-select_streams",
+      "v:0",
+      "-read_intervals",
+      `${from.toFixed(3)}%${(start + end + AROUND_S).toFixed(3)}`,
+      "-show_entries",
+      "packet=pts_time,dts_time",
+      "-of",
+      "csv=p=0",
+      input,
+    ],
     "/probe-packets.csv",
   );
   return parsePacketCsv(csv, start);

@@ -2,7 +2,11 @@
 
 /** A failure with a word on whether trying again can help (a 5xx or a dropped connection can). */
 export class PartError extends Error {
-  constructor(message: string, readonly retriable: boolean, readonly status = 0) {
+  constructor(
+    message: string,
+    readonly retriable: boolean,
+    readonly status = 0,
+  ) {
     super(message);
     this.name = "PartError";
   }

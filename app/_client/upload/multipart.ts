@@ -73,7 +73,8 @@ export async function sendFile(o: SendOptions): Promise<{ status: string }> {
   for (let round = 1; ; round++) {
     const state = await o.transport.state(o.clipId);
     if (state.status !== "uploading") return { status: state.status };
-    if (state.size !== o.file.size) throw new PartError(`This file is ${o.file.size} bytes but the upload expects ${state.size}: pick the same file that was started.`, false);
+    if (state.size !== o.file.size)
+      throw new PartError(`This file is ${o.file.size} bytes but the upload expects ${state.size}: pick the same file that was started.`, false);
     await sendMissing(o, state);
     report(o, state, { sent: state.size, stored: state.size, inFlight: 0 }, state.partCount, "completing", null);
     try {
@@ -85,8 +86,24 @@ export async function sendFile(o: SendOptions): Promise<{ status: string }> {
   }
 }
 
-function report(o: SendOptions, s: UploadState, bytes: { sent: number; stored: number; inFlight: number }, partsDone: number, phase: Progress["phase"], waiting: Waiting) {
-  o.onProgress?.({ sentBytes: bytes.sent, storedBytes: bytes.stored, partsInFlight: bytes.inFlight, totalBytes: s.size, partsDone, partCount: s.partCount, phase, waiting });
+function report(
+  o: SendOptions,
+  s: UploadState,
+  bytes: { sent: number; stored: number; inFlight: number },
+  partsDone: number,
+  phase: Progress["phase"],
+  waiting: Waiting,
+) {
+  o.onProgress?.({
+    sentBytes: bytes.sent,
+    storedBytes: bytes.stored,
+    partsInFlight: bytes.inFlight,
+    totalBytes: s.size,
+    partsDone,
+    partCount: s.partCount,
+    phase,
+    waiting,
+  });
 }
 
 async function withRetries<T>(o: SendOptions, act: () => Promise<T>): Promise<T> {
@@ -121,7 +138,15 @@ async function sendMissing(o: SendOptions, s: UploadState): Promise<void> {
   const network = o.network ?? alwaysOnline;
   const sleep = o.sleep ?? abortableSleep;
   const sending = new Set<number>();
-  const emit = () => report(o, s, { sent: doneBytes + [...inFlight.values()].reduce((a, b) => a + b, 0), stored: doneBytes, inFlight: sending.size }, partsDone, "sending", waiting);
+  const emit = () =>
+    report(
+      o,
+      s,
+      { sent: doneBytes + [...inFlight.values()].reduce((a, b) => a + b, 0), stored: doneBytes, inFlight: sending.size },
+      partsDone,
+      "sending",
+      waiting,
+    );
 
   async function sendPart(n: number): Promise<void> {
     const body = o.file.slice((n - 1) * s.partSize, Math.min(n * s.partSize, s.size));
@@ -153,7 +178,8 @@ async function sendMissing(o: SendOptions, s: UploadState): Promise<void> {
           attempt--; // time spent offline does not use up tries
           continue;
         }
-        if (attempt >= (o.maxAttempts ?? 6)) throw new PartError(`Part ${n} of ${s.partCount} could not be sent after ${attempt} tries (${message(e)}).`, false);
+        if (attempt >= (o.maxAttempts ?? 6))
+          throw new PartError(`Part ${n} of ${s.partCount} could not be sent after ${attempt} tries (${message(e)}).`, false);
         const ms = (o.backoffMs ?? defaultBackoff)(attempt);
         waiting = { kind: "retry", partNumber: n, seconds: Math.ceil(ms / 1000), error: message(e) };
         emit();
@@ -176,7 +202,7 @@ async function sendMissing(o: SendOptions, s: UploadState): Promise<void> {
     const lanes = Array.from({ length: Math.min(o.concurrency ?? 3, queue.length) }, () =>
       worker().catch((e) => {
         // One part failed for good: stop the others and report it. A lane that paused leaves the others be.
-        if (!isAbort(e)) (stop.abort(), halt.abort());
+        if (!isAbort(e)) stop.abort(), halt.abort();
         throw e;
       }),
     );

@@ -36,10 +36,7 @@ export interface UploadJob {
   kept: boolean | null;
 }
 
-export type JobAction =
-  | { type: "add"; jobs: UploadJob[] }
-  | { type: "patch"; key: string; patch: Partial<UploadJob> }
-  | { type: "remove"; key: string };
+export type JobAction = { type: "add"; jobs: UploadJob[] } | { type: "patch"; key: string; patch: Partial<UploadJob> } | { type: "remove"; key: string };
 
 let counter = 0;
 

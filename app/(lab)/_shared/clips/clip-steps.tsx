@@ -27,13 +27,21 @@ export function ClipSteps({ steps, label = "Processing steps" }: { steps: ClipVi
           const st = STATE[s.state];
           return (
             <li key={s.step} className="flex gap-3 px-3 py-2">
-              <span aria-hidden="true" className={`w-4 text-center font-bold ${st.tone}`}>{st.mark}</span>
+              <span aria-hidden="true" className={`w-4 text-center font-bold ${st.tone}`}>
+                {st.mark}
+              </span>
               <div className="min-w-0 flex-1">
                 <p>
-                  <span className="font-semibold">{i + 1}. {s.label}</span>
+                  <span className="font-semibold">
+                    {i + 1}. {s.label}
+                  </span>
                   <span className="sr-only">: </span>
                   <span className={`ml-2 font-semibold ${st.tone}`}>{st.word}</span>
-                  {s.attempts > 1 && <span className="ml-2 text-ink-600">{s.state === "running" || s.state === "retrying" ? `try ${s.attempts}` : `after ${s.attempts} tries`}</span>}
+                  {s.attempts > 1 && (
+                    <span className="ml-2 text-ink-600">
+                      {s.state === "running" || s.state === "retrying" ? `try ${s.attempts}` : `after ${s.attempts} tries`}
+                    </span>
+                  )}
                 </p>
                 {s.reason && <p className={s.state === "failed" ? "text-bad-700" : "text-ink-600"}>{s.reason}</p>}
               </div>

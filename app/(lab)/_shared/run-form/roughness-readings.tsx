@@ -9,7 +9,17 @@ import type { RunFormInput, RunFormOutput, RunLimits } from "./run-form-schema";
 const MAX_READINGS = 30;
 
 /** Ra readings in µm, added and removed one by one, with their mean and SD as they are typed. */
-export function RoughnessReadings({ control, register, errors, limits }: { control: Control<RunFormInput, unknown, RunFormOutput>; register: UseFormRegister<RunFormInput>; errors: FieldErrors<RunFormInput>; limits?: RunLimits }) {
+export function RoughnessReadings({
+  control,
+  register,
+  errors,
+  limits,
+}: {
+  control: Control<RunFormInput, unknown, RunFormOutput>;
+  register: UseFormRegister<RunFormInput>;
+  errors: FieldErrors<RunFormInput>;
+  limits?: RunLimits;
+}) {
   const { fields, append, remove } = useFieldArray({ control, name: "roughnessRaUm" });
   const rows = useWatch({ control, name: "roughnessRaUm" }) ?? [];
   const values = rows.map((r) => Number(String(r?.ra ?? "").replace(",", "."))).filter((v, i) => String(rows[i]?.ra ?? "").trim() !== "" && Number.isFinite(v));
@@ -25,7 +35,14 @@ export function RoughnessReadings({ control, register, errors, limits }: { contr
         {fields.map((f, i) => (
           <li key={f.id} className="flex items-end gap-2">
             <div className="min-w-0 flex-1">
-              <Field id={`run-ra-${i}`} label={`Reading ${i + 1}`} inputMode="decimal" autoComplete="off" error={errors.roughnessRaUm?.[i]?.ra?.message} {...register(`roughnessRaUm.${i}.ra`)} />
+              <Field
+                id={`run-ra-${i}`}
+                label={`Reading ${i + 1}`}
+                inputMode="decimal"
+                autoComplete="off"
+                error={errors.roughnessRaUm?.[i]?.ra?.message}
+                {...register(`roughnessRaUm.${i}.ra`)}
+              />
             </div>
             <Button type="button" kind="secondary" onClick={() => remove(i)} aria-label={`Remove reading ${i + 1}`}>
               Remove

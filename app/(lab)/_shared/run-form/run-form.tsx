@@ -18,8 +18,24 @@ const section = "grid gap-4 rounded-lg border border-ink-100 bg-white p-5 shadow
 const legend = "text-lg font-semibold float-left w-full md:col-span-2";
 
 /** The conditions of one run, for recording a new run or correcting one. */
-export function RunForm({ defaults, limits, submitLabel, save }: { defaults: RunFormInput; limits?: RunLimits; submitLabel: string; save: (body: RunInput) => Promise<unknown> }) {
-  const { register, handleSubmit, control, setError, formState: { errors, isSubmitting } } = useForm<RunFormInput, unknown, RunFormOutput>({
+export function RunForm({
+  defaults,
+  limits,
+  submitLabel,
+  save,
+}: {
+  defaults: RunFormInput;
+  limits?: RunLimits;
+  submitLabel: string;
+  save: (body: RunInput) => Promise<unknown>;
+}) {
+  const {
+    register,
+    handleSubmit,
+    control,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<RunFormInput, unknown, RunFormOutput>({
     resolver: zodResolver(runFormSchema),
     defaultValues: defaults,
   });
@@ -46,8 +62,23 @@ export function RunForm({ defaults, limits, submitLabel, save }: { defaults: Run
         <legend className={legend}>Test</legend>
         <Field id="run-tested" type="datetime-local" label="Tested at" error={errors.testedAt?.message} {...register("testedAt")} />
         <Field id="run-camera" label="Camera" maxLength={60} error={errors.cameraId?.message} {...register("cameraId")} />
-        <MeasureField id="run-room" label="Room temperature" units={TEMPERATURE_UNITS} error={errors.roomTemp?.value?.message ?? errors.roomTemp?.unit?.message} valueProps={register("roomTemp.value")} unitProps={register("roomTemp.unit")} />
-        <MeasureField id="run-surface" label="Surface temperature" units={TEMPERATURE_UNITS} hint={surfaceHint} error={errors.surfaceTemp?.value?.message ?? errors.surfaceTemp?.unit?.message} valueProps={register("surfaceTemp.value")} unitProps={register("surfaceTemp.unit")} />
+        <MeasureField
+          id="run-room"
+          label="Room temperature"
+          units={TEMPERATURE_UNITS}
+          error={errors.roomTemp?.value?.message ?? errors.roomTemp?.unit?.message}
+          valueProps={register("roomTemp.value")}
+          unitProps={register("roomTemp.unit")}
+        />
+        <MeasureField
+          id="run-surface"
+          label="Surface temperature"
+          units={TEMPERATURE_UNITS}
+          hint={surfaceHint}
+          error={errors.surfaceTemp?.value?.message ?? errors.surfaceTemp?.unit?.message}
+          valueProps={register("surfaceTemp.value")}
+          unitProps={register("surfaceTemp.unit")}
+        />
       </fieldset>
 
       <fieldset className={section}>
@@ -56,7 +87,14 @@ export function RunForm({ defaults, limits, submitLabel, save }: { defaults: Run
           <Field id="run-prep-method" label="Preparation method" maxLength={500} error={errors.prepMethod?.message} {...register("prepMethod")} />
         </div>
         <Field id="run-prep-abrasive" label="Abrasive" maxLength={120} error={errors.prepAbrasive?.message} {...register("prepAbrasive")} />
-        <Field id="run-prep-pad" label="Pad cycle position" maxLength={120} hint="For example, cycle 3 of 10." error={errors.prepPadPosition?.message} {...register("prepPadPosition")} />
+        <Field
+          id="run-prep-pad"
+          label="Pad cycle position"
+          maxLength={120}
+          hint="For example, cycle 3 of 10."
+          error={errors.prepPadPosition?.message}
+          {...register("prepPadPosition")}
+        />
         <div className="md:col-span-2">
           <TextareaField id="run-prep-notes" label="Preparation notes" rows={2} maxLength={1000} error={errors.prepNotes?.message} {...register("prepNotes")} />
         </div>
@@ -84,7 +122,9 @@ export function RunForm({ defaults, limits, submitLabel, save }: { defaults: Run
 
       <div className="space-y-3">
         {err && <Notice tone="error">{err.message}</Notice>}
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? "Saving…" : submitLabel}</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? "Saving…" : submitLabel}
+        </Button>
       </div>
     </form>
   );

@@ -19,7 +19,9 @@ export function AgreementSummary({ report }: { report: AgreementReport }) {
   const s = report.statistics;
   return (
     <section aria-labelledby="agreement-summary" className="space-y-3">
-      <h2 id="agreement-summary" className="text-xl font-semibold">Summary, {report.from} to {report.to}</h2>
+      <h2 id="agreement-summary" className="text-xl font-semibold">
+        Summary, {report.from} to {report.to}
+      </h2>
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Item term="Drops read twice">{report.n}</Item>
         <Item term="Bias (first − second) ± sd">{s ? `${signedMs(s.biasS)} ± ${milliseconds(s.sdS)}` : "—"}</Item>
@@ -30,11 +32,10 @@ export function AgreementSummary({ report }: { report: AgreementReport }) {
         <Notice>{report.reason}</Notice>
       ) : (
         <p className="max-w-3xl text-sm text-ink-600">
-          About 95 % of differences between two readings of a drop are expected between the limits of agreement (Bland and
-          Altman&apos;s method). The intraclass correlation is the one-way form ICC(1,1) of Shrout and Fleiss (case 1), because
-          the first and second readings of different drops come from different reviewers: it is the share of the spread of
-          single readings that comes from real differences between drops rather than from who read them. 1 means the two
-          readings are interchangeable, near 0 (or below) that the readers disagree as much as the drops differ.
+          About 95 % of differences between two readings of a drop are expected between the limits of agreement (Bland and Altman&apos;s method). The intraclass
+          correlation is the one-way form ICC(1,1) of Shrout and Fleiss (case 1), because the first and second readings of different drops come from different
+          reviewers: it is the share of the spread of single readings that comes from real differences between drops rather than from who read them. 1 means the
+          two readings are interchangeable, near 0 (or below) that the readers disagree as much as the drops differ.
           {s?.iccReason && <> {s.iccReason}</>}
         </p>
       )}

@@ -21,12 +21,19 @@ export function AgreementView({ from, to }: { from?: string; to?: string }) {
   return (
     <div className="space-y-6">
       <RangeForm from={report?.from ?? from ?? ""} to={report?.to ?? to ?? ""} errors={err?.fields ?? {}} busy={q.isFetching} onChange={change} />
-      {q.isPending && <p className="text-ink-600" role="status">Computing the agreement…</p>}
+      {q.isPending && (
+        <p className="text-ink-600" role="status">
+          Computing the agreement…
+        </p>
+      )}
       {q.isError && <Notice tone="error">{q.error.message}</Notice>}
       {report && (
         <>
           {report.truncatedAt !== null && (
-            <Notice tone="warn">This period holds more than {report.truncatedAt} drops read twice; only the most recently settled {report.truncatedAt} are counted. Choose a shorter period.</Notice>
+            <Notice tone="warn">
+              This period holds more than {report.truncatedAt} drops read twice; only the most recently settled {report.truncatedAt} are counted. Choose a
+              shorter period.
+            </Notice>
           )}
           <AgreementSummary report={report} />
           {report.n > 0 && <BlandAltmanChart report={report} />}

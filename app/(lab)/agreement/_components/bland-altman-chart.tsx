@@ -32,13 +32,37 @@ export function BlandAltmanChart({ report }: { report: AgreementReport }) {
         rows: points.map((p) => [`${p.submissionReference} · ${p.sampleSerial} · drop ${p.ordinal}`, tableMs(p.meanS), tableMs(p.differenceS)]),
       }}
       legend={
-        s && <ReferenceLegend items={[{ kind: "centre", label: `Bias ${signedMs(s.biasS)}` }, { kind: "limit", label: `Limits of agreement ${signedMs(s.lowerS)} to ${signedMs(s.upperS)}` }]} />
+        s && (
+          <ReferenceLegend
+            items={[
+              { kind: "centre", label: `Bias ${signedMs(s.biasS)}` },
+              { kind: "limit", label: `Limits of agreement ${signedMs(s.lowerS)} to ${signedMs(s.upperS)}` },
+            ]}
+          />
+        )
       }
     >
       <ScatterChart {...CHART_ROOT} margin={{ ...CHART_MARGIN, right: 150, left: 32 }}>
         <CartesianGrid {...GRID} />
-        <XAxis type="number" dataKey="meanS" domain={x.domain} ticks={x.ticks} tickFormatter={x.format} {...AXIS} label={xAxisLabel("Mean of the two readings", "s")} />
-        <YAxis type="number" dataKey="differenceS" domain={y.domain} ticks={y.ticks} tickFormatter={y.format} {...AXIS} width={64} label={yAxisLabel("First − second", "s")} />
+        <XAxis
+          type="number"
+          dataKey="meanS"
+          domain={x.domain}
+          ticks={x.ticks}
+          tickFormatter={x.format}
+          {...AXIS}
+          label={xAxisLabel("Mean of the two readings", "s")}
+        />
+        <YAxis
+          type="number"
+          dataKey="differenceS"
+          domain={y.domain}
+          ticks={y.ticks}
+          tickFormatter={y.format}
+          {...AXIS}
+          width={64}
+          label={yAxisLabel("First − second", "s")}
+        />
         {lines.map((l) => (
           <ReferenceLine key={l.text} y={l.value} {...REFERENCE[l.kind]} label={referenceLabel(l.text, REFERENCE[l.kind].stroke)} />
         ))}

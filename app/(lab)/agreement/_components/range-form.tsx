@@ -32,12 +32,28 @@ export function RangeForm({
   return (
     <form onSubmit={submit} className="flex flex-wrap items-end gap-4 rounded-lg border border-ink-100 bg-white p-4 shadow-sm" aria-label="Period">
       <div className="w-44">
-        <Field id="agreement-from" label="From (UTC day)" type="date" value={draft.from} error={errors.from} onChange={(e) => setDraft({ ...draft, from: e.target.value })} />
+        <Field
+          id="agreement-from"
+          label="From (UTC day)"
+          type="date"
+          value={draft.from}
+          error={errors.from}
+          onChange={(e) => setDraft({ ...draft, from: e.target.value })}
+        />
       </div>
       <div className="w-44">
-        <Field id="agreement-to" label="To (UTC day, included)" type="date" value={draft.to} error={errors.to} onChange={(e) => setDraft({ ...draft, to: e.target.value })} />
+        <Field
+          id="agreement-to"
+          label="To (UTC day, included)"
+          type="date"
+          value={draft.to}
+          error={errors.to}
+          onChange={(e) => setDraft({ ...draft, to: e.target.value })}
+        />
       </div>
-      <Button type="submit" disabled={busy}>{busy ? "Computing…" : "Show agreement"}</Button>
+      <Button type="submit" disabled={busy}>
+        {busy ? "Computing…" : "Show agreement"}
+      </Button>
     </form>
   );
 }

@@ -11,19 +11,34 @@ export function AuditEvent({ e, onRecord }: { e: AuditEventView; onRecord: (enti
     <li data-testid="audit-event" className="space-y-2 rounded-lg border border-ink-100 bg-white p-4 shadow-sm">
       <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1 text-sm">
         <span className="font-mono font-semibold">{e.action}</span>
-        <span className="text-ink-600"><LocalTime iso={e.at} /></span>
+        <span className="text-ink-600">
+          <LocalTime iso={e.at} />
+        </span>
         <span>by {e.actor ? e.actor.name : <em>the system</em>}</span>
         <span className="text-ink-600">
           {recordLabel(e.entity)}
           {e.entityId && (
             <>
               {" "}
-              <button type="button" className="font-mono text-xs underline" title="Show only this record's events" onClick={() => onRecord(e.entity, e.entityId!)}>
+              <button
+                type="button"
+                className="font-mono text-xs underline"
+                title="Show only this record's events"
+                onClick={() => onRecord(e.entity, e.entityId!)}
+              >
                 {e.entityId}
               </button>
             </>
           )}
-          {href && <> · <Link href={href} className="font-semibold text-wick-700 underline">open</Link></>}
+          {href && (
+            <>
+              {" "}
+              ·{" "}
+              <Link href={href} className="font-semibold text-wick-700 underline">
+                open
+              </Link>
+            </>
+          )}
         </span>
       </div>
       {e.hidden ? (

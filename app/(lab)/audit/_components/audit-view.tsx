@@ -22,7 +22,11 @@ export function AuditView({ filters }: { filters: AuditFilters }) {
   return (
     <div className="space-y-6">
       <AuditFiltersForm filters={filters} errors={err?.fields ?? {}} busy={q.isFetching} onApply={(f) => go({ ...f, pageSize: filters.pageSize })} />
-      {q.isPending && <p className="text-ink-600" role="status">Loading the events…</p>}
+      {q.isPending && (
+        <p className="text-ink-600" role="status">
+          Loading the events…
+        </p>
+      )}
       {q.isError && <Notice tone="error">{q.error.message}</Notice>}
       {data && (
         <>

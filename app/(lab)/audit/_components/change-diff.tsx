@@ -14,9 +14,19 @@ export function ChangeDiff({ before, after }: { before: unknown; after: unknown 
     <table className="w-full table-fixed text-left text-sm">
       <thead className="text-xs uppercase tracking-wide text-ink-600">
         <tr>
-          <th scope="col" className="w-1/4 py-1 pr-3">Field</th>
-          {hasBefore && <th scope="col" className="py-1 pr-3">Before</th>}
-          {hasAfter && <th scope="col" className="py-1">{both ? "After" : "Recorded"}</th>}
+          <th scope="col" className="w-1/4 py-1 pr-3">
+            Field
+          </th>
+          {hasBefore && (
+            <th scope="col" className="py-1 pr-3">
+              Before
+            </th>
+          )}
+          {hasAfter && (
+            <th scope="col" className="py-1">
+              {both ? "After" : "Recorded"}
+            </th>
+          )}
         </tr>
       </thead>
       <tbody>

@@ -22,7 +22,12 @@ function Reading({ r }: { r: DropView["readings"][number] | undefined }) {
 
 export function DiscrepancyTable() {
   const q = useDiscrepancies();
-  if (q.isPending) return <p className="text-ink-600" role="status">Loading the discrepancies…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Loading the discrepancies…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   if (q.data.length === 0) return <Notice>No drop has readings that disagree.</Notice>;
   return (
@@ -30,7 +35,13 @@ export function DiscrepancyTable() {
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Drops whose readings disagree, the oldest first</caption>
         <thead className="bg-ink-50 text-ink-600">
-          <tr>{COLUMNS.map((c) => <th key={c} scope="col" className="px-3 py-2">{c}</th>)}</tr>
+          <tr>
+            {COLUMNS.map((c) => (
+              <th key={c} scope="col" className="px-3 py-2">
+                {c}
+              </th>
+            ))}
+          </tr>
         </thead>
         <tbody>
           {q.data.map((d) => {
@@ -40,20 +51,29 @@ export function DiscrepancyTable() {
               <tr key={d.id} className="border-t border-ink-100 align-top">
                 <th scope="row" className="whitespace-nowrap px-3 py-2">
                   <Link href={`/drops/${d.id}`} className="font-semibold text-wick-700 underline">
-                    Drop {d.ordinal}<span className="sr-only"> of sample {d.sampleSerial}</span>
+                    Drop {d.ordinal}
+                    <span className="sr-only"> of sample {d.sampleSerial}</span>
                   </Link>
                 </th>
                 <td className="whitespace-nowrap px-3 py-2">
-                  <Link href={`/submissions/${d.submissionId}`} className="text-wick-700 underline">{d.submissionReference}</Link>
+                  <Link href={`/submissions/${d.submissionId}`} className="text-wick-700 underline">
+                    {d.submissionReference}
+                  </Link>
                 </td>
                 <td className="whitespace-nowrap px-3 py-2">{d.sampleSerial}</td>
-                <td className="whitespace-nowrap px-3 py-2"><Reading r={first} /></td>
-                <td className="whitespace-nowrap px-3 py-2"><Reading r={second} /></td>
+                <td className="whitespace-nowrap px-3 py-2">
+                  <Reading r={first} />
+                </td>
+                <td className="whitespace-nowrap px-3 py-2">
+                  <Reading r={second} />
+                </td>
                 <td className="whitespace-nowrap px-3 py-2">
                   {c ? (
                     <>
                       <span className="font-semibold">{signedSeconds(c.timeDifferenceS)}</span>
-                      <p className="text-xs text-ink-600">dispense {signedSeconds(c.dispenseDifferenceS)} · clear {signedSeconds(c.clearDifferenceS)}</p>
+                      <p className="text-xs text-ink-600">
+                        dispense {signedSeconds(c.dispenseDifferenceS)} · clear {signedSeconds(c.clearDifferenceS)}
+                      </p>
                     </>
                   ) : (
                     "—"
@@ -62,7 +82,13 @@ export function DiscrepancyTable() {
                 <td className="whitespace-nowrap px-3 py-2">±{seconds(d.readingToleranceS)}</td>
                 <td className="whitespace-nowrap px-3 py-2">{d.stateChangedAt ? <LocalTime iso={d.stateChangedAt} /> : "—"}</td>
                 <td className="whitespace-nowrap px-3 py-2">
-                  <Link href={`/drops/${d.id}/ruling`} className="font-semibold text-wick-700 underline">Rule<span className="sr-only"> on drop {d.ordinal} of sample {d.sampleSerial}</span></Link>
+                  <Link href={`/drops/${d.id}/ruling`} className="font-semibold text-wick-700 underline">
+                    Rule
+                    <span className="sr-only">
+                      {" "}
+                      on drop {d.ordinal} of sample {d.sampleSerial}
+                    </span>
+                  </Link>
                 </td>
               </tr>
             );

@@ -12,7 +12,9 @@ export default async function EditionPage({ params }: { params: Promise<{ id: st
   return (
     <div className="space-y-6">
       <p>
-        <Link href="/editions" className="text-sm font-semibold text-wick-700 underline">Back to editions</Link>
+        <Link href="/editions" className="text-sm font-semibold text-wick-700 underline">
+          Back to editions
+        </Link>
       </p>
       <EditionDetail id={id} isLead={hasRole(actor, "lead")} />
       <EditionCaution />

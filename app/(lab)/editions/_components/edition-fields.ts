@@ -20,7 +20,12 @@ export const EDITION_VALUES: EditionFieldMeta[] = [
     hint: "Fail the submission as soon as one ball is below the minimum, or report the ball and let the rounds and the tolerance limit decide.",
   },
   { key: "dropsPerBall", label: "Drops per ball" },
-  { key: "guardBandS", label: "Guard band", unit: "s", hint: "Margin above the minimum inside which a result counts as close to the limit and asks for the next round." },
+  {
+    key: "guardBandS",
+    label: "Guard band",
+    unit: "s",
+    hint: "Margin above the minimum inside which a result counts as close to the limit and asks for the next round.",
+  },
   { key: "roundSizes", label: "Round sizes", hint: "Samples asked for in each round, in order, separated by commas: for example 2, 8, 24." },
   { key: "toleranceCoverage", label: "Tolerance coverage (p)", hint: "A proportion between 0 and 1, for example 0.9." },
   { key: "toleranceConfidence", label: "Tolerance confidence (γ)", hint: "A proportion between 0 and 1, for example 0.95." },

@@ -10,21 +10,45 @@ import { labelWithUnit, type EditionFieldMeta } from "./edition-fields";
 import type { EditionFormInput } from "./edition-form-schema";
 
 /** One value of an edition beside the note saying where it comes from. */
-export function EditionValueRow({ meta, register, errors }: { meta: EditionFieldMeta; register: UseFormRegister<EditionFormInput>; errors: FieldErrors<EditionFormInput> }) {
+export function EditionValueRow({
+  meta,
+  register,
+  errors,
+}: {
+  meta: EditionFieldMeta;
+  register: UseFormRegister<EditionFormInput>;
+  errors: FieldErrors<EditionFormInput>;
+}) {
   const id = `edition-${meta.key}`;
   const error = firstMessage(errors[meta.key]);
   return (
     <div className="grid gap-3 border-t border-ink-100 py-4 md:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
       {meta.key === "criterion" ? (
         <SelectField id={id} label={meta.label} hint={meta.hint} error={error} {...register("criterion")}>
-          {CRITERIA.map((c) => <option key={c} value={c}>{CRITERION_LABELS[c]}</option>)}
+          {CRITERIA.map((c) => (
+            <option key={c} value={c}>
+              {CRITERION_LABELS[c]}
+            </option>
+          ))}
         </SelectField>
       ) : meta.key === "belowMinimumRule" ? (
         <SelectField id={id} label={meta.label} hint={meta.hint} error={error} {...register("belowMinimumRule")}>
-          {BELOW_MINIMUM_RULES.map((r) => <option key={r} value={r}>{BELOW_MINIMUM_RULE_LABELS[r]}</option>)}
+          {BELOW_MINIMUM_RULES.map((r) => (
+            <option key={r} value={r}>
+              {BELOW_MINIMUM_RULE_LABELS[r]}
+            </option>
+          ))}
         </SelectField>
       ) : (
-        <Field id={id} label={labelWithUnit(meta)} hint={meta.hint} error={error} inputMode={meta.key === "roundSizes" ? "text" : "decimal"} autoComplete="off" {...register(meta.key)} />
+        <Field
+          id={id}
+          label={labelWithUnit(meta)}
+          hint={meta.hint}
+          error={error}
+          inputMode={meta.key === "roundSizes" ? "text" : "decimal"}
+          autoComplete="off"
+          {...register(meta.key)}
+        />
       )}
       <TextareaField
         id={`${id}-source`}

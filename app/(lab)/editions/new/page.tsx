@@ -6,14 +6,15 @@ import { EditionFormLoader } from "../_components/edition-form-loader";
 
 export const metadata = { title: "New edition" };
 
-
 export default async function NewEditionPage({ searchParams }: { searchParams: Promise<{ from?: string }> }) {
   await requirePageActor(["lead"]);
   const { from } = await searchParams;
   return (
     <div className="space-y-6">
       <div>
-        <Link href="/editions" className="text-sm font-semibold text-wick-700 underline">Back to editions</Link>
+        <Link href="/editions" className="text-sm font-semibold text-wick-700 underline">
+          Back to editions
+        </Link>
         <h1 className="mt-2 text-3xl font-bold">New specification edition</h1>
       </div>
       <EditionCaution />

@@ -18,7 +18,10 @@ const STATES = [
 
 function stateWords(m: MailListRow): { text: string; tone: string } {
   if (m.status === "sent") return { text: "Sent", tone: "bg-ok-100 text-ok-700" };
-  if (m.status === "failed") return m.attempts >= MAX_ATTEMPTS ? { text: "Failed, no more attempts", tone: "bg-bad-100 text-bad-700" } : { text: "Failed, will retry", tone: "bg-wick-100 text-wick-700" };
+  if (m.status === "failed")
+    return m.attempts >= MAX_ATTEMPTS
+      ? { text: "Failed, no more attempts", tone: "bg-bad-100 text-bad-700" }
+      : { text: "Failed, will retry", tone: "bg-wick-100 text-wick-700" };
   return { text: m.status === "sending" ? "Sending" : "Queued", tone: "bg-ink-100 text-ink-800" };
 }
 
@@ -35,10 +38,18 @@ export function MailTable() {
       <label className="flex items-center gap-2 text-sm font-semibold text-ink-800">
         Show
         <select value={status} onChange={(e) => setStatus(e.target.value)} className="rounded-md border border-ink-200 bg-white px-2 py-1 font-normal">
-          {STATES.map((s) => <option key={s.value} value={s.value}>{s.label}</option>)}
+          {STATES.map((s) => (
+            <option key={s.value} value={s.value}>
+              {s.label}
+            </option>
+          ))}
         </select>
       </label>
-      {q.isPending && <p className="text-ink-600" role="status">Loading the mail…</p>}
+      {q.isPending && (
+        <p className="text-ink-600" role="status">
+          Loading the mail…
+        </p>
+      )}
       {q.isError && <Notice tone="error">{q.error.message}</Notice>}
       {q.data?.length === 0 && <p className="text-ink-600">No mail in this state.</p>}
       {!!q.data?.length && (
@@ -46,17 +57,29 @@ export function MailTable() {
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Mail the lab sends, newest first</caption>
             <thead className="bg-ink-50 text-ink-600">
-              <tr>{["State", "Attempts", "To", "Subject", "Written", "Sent", "Last error"].map((h) => <th key={h} scope="col" className="px-3 py-2">{h}</th>)}</tr>
+              <tr>
+                {["State", "Attempts", "To", "Subject", "Written", "Sent", "Last error"].map((h) => (
+                  <th key={h} scope="col" className="px-3 py-2">
+                    {h}
+                  </th>
+                ))}
+              </tr>
             </thead>
             <tbody>
               {q.data.map((m) => {
                 const s = stateWords(m);
                 return (
                   <tr key={m.id} className="border-t border-ink-100 align-top">
-                    <td className="px-3 py-2"><span className={`whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-semibold ${s.tone}`}>{s.text}</span></td>
+                    <td className="px-3 py-2">
+                      <span className={`whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-semibold ${s.tone}`}>{s.text}</span>
+                    </td>
                     <td className="px-3 py-2 tabular-nums">{m.attempts}</td>
                     <td className="break-all px-3 py-2">{m.toAddress}</td>
-                    <td className="px-3 py-2"><span className="font-semibold">{m.subject}</span><br /><span className="text-xs text-ink-600">{KINDS[m.kind]?.label ?? m.kind}</span></td>
+                    <td className="px-3 py-2">
+                      <span className="font-semibold">{m.subject}</span>
+                      <br />
+                      <span className="text-xs text-ink-600">{KINDS[m.kind]?.label ?? m.kind}</span>
+                    </td>
                     <td className="whitespace-nowrap px-3 py-2">{formatInstant(m.createdAt)}</td>
                     <td className="whitespace-nowrap px-3 py-2">{m.sentAt ? formatInstant(m.sentAt) : "—"}</td>
                     <td className="max-w-xs break-words px-3 py-2 text-bad-700">{m.lastError ?? ""}</td>

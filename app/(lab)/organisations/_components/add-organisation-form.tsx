@@ -24,20 +24,36 @@ export function AddOrganisationForm() {
     setAdded(null);
     save.mutate(
       { name: String(data.get("name") ?? ""), contactEmails },
-      { onSuccess: (o) => { setAdded(`${o.name} was added.`); form.reset(); } },
+      {
+        onSuccess: (o) => {
+          setAdded(`${o.name} was added.`);
+          form.reset();
+        },
+      },
     );
   }
 
   return (
     <section aria-labelledby="add-org-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="add-org-heading" className="text-lg font-semibold">Add a manufacturer</h2>
+      <h2 id="add-org-heading" className="text-lg font-semibold">
+        Add a manufacturer
+      </h2>
       <form onSubmit={onSubmit} noValidate className="mt-4 grid gap-4 md:grid-cols-2">
         <Field id="org-name" name="name" label="Name" maxLength={120} error={err?.fields.name} required />
-        <TextareaField id="org-contacts" name="contacts" label="Contact e-mails" rows={2} hint="One address per line, or separated by commas." error={contactsError(err, sent)} />
+        <TextareaField
+          id="org-contacts"
+          name="contacts"
+          label="Contact e-mails"
+          rows={2}
+          hint="One address per line, or separated by commas."
+          error={contactsError(err, sent)}
+        />
         <div className="space-y-3 md:col-span-2">
           {err && <Notice tone="error">{err.message}</Notice>}
           {added && <Notice tone="ok">{added}</Notice>}
-          <Button type="submit" disabled={save.isPending}>{save.isPending ? "Adding…" : "Add organisation"}</Button>
+          <Button type="submit" disabled={save.isPending}>
+            {save.isPending ? "Adding…" : "Add organisation"}
+          </Button>
         </div>
       </form>
     </section>

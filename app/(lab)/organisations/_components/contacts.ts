@@ -2,7 +2,10 @@ import type { ApiError } from "@/lib/http/client";
 
 /** Addresses typed one per line, or separated by commas or spaces. */
 export function parseContacts(text: string): string[] {
-  return text.split(/[\s,;]+/).map((s) => s.trim()).filter(Boolean);
+  return text
+    .split(/[\s,;]+/)
+    .map((s) => s.trim())
+    .filter(Boolean);
 }
 
 /** The server names a bad address by its position ("contactEmails.1"); people read it by its text. */

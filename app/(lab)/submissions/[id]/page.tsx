@@ -12,7 +12,9 @@ export default async function SubmissionPage({ params }: { params: Promise<{ id:
   return (
     <div className="space-y-6">
       <p>
-        <Link href="/submissions" className="text-sm font-semibold text-wick-700 underline">Back to submissions</Link>
+        <Link href="/submissions" className="text-sm font-semibold text-wick-700 underline">
+          Back to submissions
+        </Link>
       </p>
       <SubmissionDetail id={id} canEdit={canEditIntake(actor)} />
     </div>

@@ -9,7 +9,9 @@ export default async function NewSubmissionPage() {
   return (
     <div className="space-y-6">
       <div>
-        <Link href="/submissions" className="text-sm font-semibold text-wick-700 underline">Back to submissions</Link>
+        <Link href="/submissions" className="text-sm font-semibold text-wick-700 underline">
+          Back to submissions
+        </Link>
         <h1 className="mt-2 text-3xl font-bold">New submission</h1>
         <p className="mt-1 text-ink-600">
           Log a ball model as it arrives. The specification edition in force on the received date is attached to it and cannot be swapped later.

@@ -25,13 +25,21 @@ export function InviteForm() {
     setSentTo(null);
     invite.mutate(
       { email: String(data.get("email") ?? ""), name: String(data.get("name") ?? ""), roles, organisationId },
-      { onSuccess: (r) => { setSentTo(r.user.email); form.reset(); setRoles(["technician"]); } },
+      {
+        onSuccess: (r) => {
+          setSentTo(r.user.email);
+          form.reset();
+          setRoles(["technician"]);
+        },
+      },
     );
   }
 
   return (
     <section aria-labelledby="invite-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="invite-heading" className="text-lg font-semibold">Invite a person</h2>
+      <h2 id="invite-heading" className="text-lg font-semibold">
+        Invite a person
+      </h2>
       <form onSubmit={onSubmit} className="mt-4 grid gap-4 md:grid-cols-2" noValidate>
         <Field id="invite-name" name="name" label="Name" maxLength={120} error={err?.fields.name} required />
         <Field id="invite-email" name="email" type="email" label="E-mail" error={err?.fields.email} required />
@@ -42,10 +50,16 @@ export function InviteForm() {
         </div>
         {manufacturer && (
           <div className="space-y-1">
-            <label htmlFor="invite-org" className="block text-sm font-semibold text-ink-800">Organisation</label>
+            <label htmlFor="invite-org" className="block text-sm font-semibold text-ink-800">
+              Organisation
+            </label>
             <select id="invite-org" name="organisationId" className="block w-full rounded-md border border-ink-200 bg-white px-3 py-2">
               <option value="">Choose…</option>
-              {organisations.data?.map((o) => <option key={o.id} value={o.id}>{o.name}</option>)}
+              {organisations.data?.map((o) => (
+                <option key={o.id} value={o.id}>
+                  {o.name}
+                </option>
+              ))}
             </select>
             {err?.fields.organisationId && <p className="text-sm text-bad-700">{err.fields.organisationId}</p>}
           </div>
@@ -53,7 +67,9 @@ export function InviteForm() {
         <div className="space-y-3 md:col-span-2">
           {err && <Notice tone="error">{err.message}</Notice>}
           {sentTo && <Notice tone="ok">Invitation sent to {sentTo}.</Notice>}
-          <Button type="submit" disabled={invite.isPending}>{invite.isPending ? "Sending…" : "Send invitation"}</Button>
+          <Button type="submit" disabled={invite.isPending}>
+            {invite.isPending ? "Sending…" : "Send invitation"}
+          </Button>
         </div>
       </form>
     </section>

@@ -33,8 +33,18 @@ export function UserRow({ user, isSelf }: { user: UserView; isSelf: boolean }) {
           <div className="space-y-2">
             <RoleCheckboxes idPrefix={`roles-${user.id}`} value={roles} onChange={setRoles} />
             <div className="flex gap-2">
-              <Button onClick={() => update.mutate({ id: user.id, change: { roles } }, { onSuccess: () => setEditing(false) })} disabled={update.isPending}>Save roles</Button>
-              <Button kind="secondary" onClick={() => { setEditing(false); setRoles(user.roles); }}>Cancel</Button>
+              <Button onClick={() => update.mutate({ id: user.id, change: { roles } }, { onSuccess: () => setEditing(false) })} disabled={update.isPending}>
+                Save roles
+              </Button>
+              <Button
+                kind="secondary"
+                onClick={() => {
+                  setEditing(false);
+                  setRoles(user.roles);
+                }}
+              >
+                Cancel
+              </Button>
             </div>
           </div>
         ) : (
@@ -46,19 +56,37 @@ export function UserRow({ user, isSelf }: { user: UserView; isSelf: boolean }) {
       </td>
       <td className="space-y-2 px-3 py-3">
         <div className="flex flex-wrap gap-2">
-          {!editing && <Button kind="secondary" onClick={() => setEditing(true)} aria-label={`Change roles of ${user.name}`}>Roles</Button>}
+          {!editing && (
+            <Button kind="secondary" onClick={() => setEditing(true)} aria-label={`Change roles of ${user.name}`}>
+              Roles
+            </Button>
+          )}
           {user.status === "invited" && (
-            <Button kind="secondary" onClick={() => reinvite.mutate(user.id)} disabled={reinvite.isPending}>Send new link</Button>
+            <Button kind="secondary" onClick={() => reinvite.mutate(user.id)} disabled={reinvite.isPending}>
+              Send new link
+            </Button>
           )}
           {!isSelf && user.status !== "deactivated" && (
-            <Button kind="danger" onClick={() => update.mutate({ id: user.id, change: { active: false } })} aria-label={`Deactivate ${user.name}`}>Deactivate</Button>
+            <Button kind="danger" onClick={() => update.mutate({ id: user.id, change: { active: false } })} aria-label={`Deactivate ${user.name}`}>
+              Deactivate
+            </Button>
           )}
           {user.status === "deactivated" && (
-            <Button kind="secondary" onClick={() => update.mutate({ id: user.id, change: { active: true } })}>Reactivate</Button>
+            <Button kind="secondary" onClick={() => update.mutate({ id: user.id, change: { active: true } })}>
+              Reactivate
+            </Button>
           )}
         </div>
-        {error && <p role="alert" className="text-sm text-bad-700">{error.message}</p>}
-        {reinvite.isSuccess && <p role="status" className="text-sm text-ok-700">A new link was sent.</p>}
+        {error && (
+          <p role="alert" className="text-sm text-bad-700">
+            {error.message}
+          </p>
+        )}
+        {reinvite.isSuccess && (
+          <p role="status" className="text-sm text-ok-700">
+            A new link was sent.
+          </p>
+        )}
       </td>
     </tr>
   );

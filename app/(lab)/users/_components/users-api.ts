@@ -30,8 +30,7 @@ export function useInvite() {
 export function useUpdateUser() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, change }: { id: string; change: UserUpdate }) =>
-      fetchJson<{ user: UserView }>(`/api/users/${id}`, { method: "PATCH", body: change }),
+    mutationFn: ({ id, change }: { id: string; change: UserUpdate }) => fetchJson<{ user: UserView }>(`/api/users/${id}`, { method: "PATCH", body: change }),
     onSuccess: () => qc.invalidateQueries({ queryKey: USERS }),
   });
 }

@@ -14,14 +14,24 @@ export function UsersTable({ selfId }: { selfId: string }) {
         <caption className="sr-only">All accounts</caption>
         <thead className="bg-ink-50 text-sm text-ink-600">
           <tr>
-            <th scope="col" className="px-3 py-2">Person</th>
-            <th scope="col" className="px-3 py-2">Roles</th>
-            <th scope="col" className="px-3 py-2">Status</th>
-            <th scope="col" className="px-3 py-2">Actions</th>
+            <th scope="col" className="px-3 py-2">
+              Person
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Roles
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Status
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Actions
+            </th>
           </tr>
         </thead>
         <tbody>
-          {users.data.map((u) => <UserRow key={u.id} user={u} isSelf={u.id === selfId} />)}
+          {users.data.map((u) => (
+            <UserRow key={u.id} user={u} isSelf={u.id === selfId} />
+          ))}
         </tbody>
       </table>
     </section>

@@ -6,6 +6,4 @@ import { acceptInviteSchema } from "@/lib/users/schema";
 export const GET = route({ public: true }, async ({ params }) => describeInvite(param(params, "token")));
 
 // POST /api/invites/:token — set the password; the link then stops working.
-export const POST = route({ public: true, body: acceptInviteSchema }, async ({ params, body }) =>
-  acceptInvite(param(params, "token"), body.password),
-);
+export const POST = route({ public: true, body: acceptInviteSchema }, async ({ params, body }) => acceptInvite(param(params, "token"), body.password));

@@ -11,7 +11,12 @@ import { ClipMedia } from "./clip-media";
 
 export function ClipDetail({ id }: { id: string }) {
   const q = useClip(id);
-  if (q.isPending) return <p className="text-ink-600" role="status">Loading the clip…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Loading the clip…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const clip = q.data;
   const problem = clipProblem(clip);
@@ -19,7 +24,9 @@ export function ClipDetail({ id }: { id: string }) {
   return (
     <div className="space-y-6">
       <div>
-        <Link href={`/runs/${clip.runId}`} className="text-sm font-semibold text-wick-700 underline">Back to the run</Link>
+        <Link href={`/runs/${clip.runId}`} className="text-sm font-semibold text-wick-700 underline">
+          Back to the run
+        </Link>
         <p className="mt-2 text-sm font-semibold uppercase tracking-wide text-wick-700">Clip · {formatBytes(clip.storedSize ?? clip.declaredSize)}</p>
         <h1 className="break-all text-3xl font-bold">{clip.originalName}</h1>
         <p className="mt-2 flex flex-wrap items-center gap-2">
@@ -31,17 +38,23 @@ export function ClipDetail({ id }: { id: string }) {
       {clip.duplicateOf && (
         <Notice tone="warn">
           These are the same bytes as a clip uploaded earlier. Both are kept as evidence.{" "}
-          <Link href={`/clips/${clip.duplicateOf}`} className="font-semibold underline">Open the first upload</Link>
+          <Link href={`/clips/${clip.duplicateOf}`} className="font-semibold underline">
+            Open the first upload
+          </Link>
         </Notice>
       )}
 
       <section aria-labelledby="steps-heading" className="space-y-3">
-        <h2 id="steps-heading" className="text-xl font-semibold">Processing</h2>
+        <h2 id="steps-heading" className="text-xl font-semibold">
+          Processing
+        </h2>
         <ClipSteps steps={clip.steps} />
       </section>
 
       <section aria-labelledby="facts-heading" className="space-y-3 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-        <h2 id="facts-heading" className="text-xl font-semibold">What is known about the file</h2>
+        <h2 id="facts-heading" className="text-xl font-semibold">
+          What is known about the file
+        </h2>
         <ClipFacts clip={clip} />
       </section>
 

@@ -10,7 +10,10 @@ const pending = (what: string) => <span className="text-ink-600">{what}</span>;
 /** Size, checksum, container, the frame index in words and the proxy decision. */
 export function ClipFacts({ clip }: { clip: ClipView }) {
   const ix = clip.index;
-  const sizes = clip.storedSize !== null && clip.storedSize !== clip.declaredSize ? `${formatBytes(clip.storedSize)} stored (${formatBytes(clip.declaredSize)} declared)` : formatBytes(clip.storedSize ?? clip.declaredSize);
+  const sizes =
+    clip.storedSize !== null && clip.storedSize !== clip.declaredSize
+      ? `${formatBytes(clip.storedSize)} stored (${formatBytes(clip.declaredSize)} declared)`
+      : formatBytes(clip.storedSize ?? clip.declaredSize);
   const items = [
     { label: "Size", value: `${sizes} · ${clip.storedSize ?? clip.declaredSize} bytes` },
     { label: "Container", value: clip.format ? <span title={clip.format}>{containerName(clip.format)}</span> : pending("not probed yet") },
@@ -32,7 +35,8 @@ export function ClipFacts({ clip }: { clip: ClipView }) {
           <>
             <p className="mt-0.5">{describeIndex(ix)}.</p>
             <p className="text-sm text-ink-600">
-              Lasts {seconds(Number(indexDuration(ix).toFixed(3)))}; keyframes at most {seconds(Number(ix.maxKeyframeIntervalS.toFixed(2)))} apart; time base {ix.timeBase.num}/{ix.timeBase.den} s.
+              Lasts {seconds(Number(indexDuration(ix).toFixed(3)))}; keyframes at most {seconds(Number(ix.maxKeyframeIntervalS.toFixed(2)))} apart; time base{" "}
+              {ix.timeBase.num}/{ix.timeBase.den} s.
             </p>
           </>
         ) : (

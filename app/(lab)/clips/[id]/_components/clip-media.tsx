@@ -10,10 +10,16 @@ export function ClipMedia({ clip }: { clip: ClipView }) {
   if (!clip.posterUrl && !clip.filmstrip && !clip.playback) return null;
   return (
     <section aria-labelledby="media-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="media-heading" className="text-xl font-semibold">Pictures and player</h2>
+      <h2 id="media-heading" className="text-xl font-semibold">
+        Pictures and player
+      </h2>
       {clip.playback && (
         <div className="space-y-1">
-          {index.isPending && <p className="text-ink-600" role="status">Loading the frame index…</p>}
+          {index.isPending && (
+            <p className="text-ink-600" role="status">
+              Loading the frame index…
+            </p>
+          )}
           {index.isError && <Notice tone="error">{index.error.message}</Notice>}
           {index.data && (
             <FramePlayer
@@ -26,7 +32,8 @@ export function ClipMedia({ clip }: { clip: ClipView }) {
             />
           )}
           <p className="text-sm text-ink-600">
-            {clip.playback.isProxy ? "Playing the stepping proxy: every frame of the original, with its own timestamp." : "Playing the original file."} Each frame number shown has been matched to the frame index.
+            {clip.playback.isProxy ? "Playing the stepping proxy: every frame of the original, with its own timestamp." : "Playing the original file."} Each
+            frame number shown has been matched to the frame index.
           </p>
         </div>
       )}
@@ -39,7 +46,11 @@ export function ClipMedia({ clip }: { clip: ClipView }) {
         )}
         {clip.filmstrip && (
           <figure className="space-y-1">
-            <img src={clip.filmstrip.url} alt={`Filmstrip of ${clip.originalName}: ${clip.filmstrip.tiles} frames spread over the recording`} className="w-full rounded border border-ink-100" />
+            <img
+              src={clip.filmstrip.url}
+              alt={`Filmstrip of ${clip.originalName}: ${clip.filmstrip.tiles} frames spread over the recording`}
+              className="w-full rounded border border-ink-100"
+            />
             <figcaption className="text-sm text-ink-600">Filmstrip: {clip.filmstrip.tiles} frames spread evenly over the recording</figcaption>
           </figure>
         )}

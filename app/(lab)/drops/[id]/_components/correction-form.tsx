@@ -11,7 +11,12 @@ export function CorrectionForm({ readingId }: { readingId: string }) {
   const [open, setOpen] = useState(false);
   const [reason, setReason] = useState("");
   const start = useStartCorrection();
-  if (!open) return <Button kind="secondary" onClick={() => setOpen(true)}>Correct my reading…</Button>;
+  if (!open)
+    return (
+      <Button kind="secondary" onClick={() => setOpen(true)}>
+        Correct my reading…
+      </Button>
+    );
   const error = start.error instanceof ApiError ? (start.error.fields.reason ?? start.error.message) : start.error?.message;
   return (
     <form
@@ -21,11 +26,22 @@ export function CorrectionForm({ readingId }: { readingId: string }) {
         start.mutate({ readingId, reason }, { onSuccess: () => setOpen(false) });
       }}
     >
-      <TextareaField id="correction-reason" label="Why the reading needs correcting" value={reason} onChange={(e) => setReason(e.target.value)} error={error} rows={2} />
+      <TextareaField
+        id="correction-reason"
+        label="Why the reading needs correcting"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        error={error}
+        rows={2}
+      />
       <p className="text-sm text-ink-600">Your submitted reading is kept and shown as superseded once the correction is submitted.</p>
       <div className="flex gap-2">
-        <Button type="submit" disabled={start.isPending}>Start the correction</Button>
-        <Button type="button" kind="secondary" onClick={() => setOpen(false)}>Cancel</Button>
+        <Button type="submit" disabled={start.isPending}>
+          Start the correction
+        </Button>
+        <Button type="button" kind="secondary" onClick={() => setOpen(false)}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -25,14 +25,26 @@ export function MarkPanel({ drop, onJump }: { drop: DropView; onJump: (frame: nu
       );
     }
     if (drop.mySubmitted) return <Notice tone="ok">Your reading is submitted: {s(drop.mySubmitted.timeS!)}.</Notice>;
-    return <p className="text-sm text-ink-700">Step to the first frame with the drop on the surface and mark it, then to the first frame where it can no longer be seen.</p>;
+    return (
+      <p className="text-sm text-ink-700">
+        Step to the first frame with the drop on the surface and mark it, then to the first frame where it can no longer be seen.
+      </p>
+    );
   }
 
   const both = draft.dispenseFrame !== null && draft.clearFrame !== null;
   const markLine = (label: string, f: number | null) => (
     <div className="flex items-baseline justify-between gap-2">
       <dt className="text-ink-600">{label}</dt>
-      <dd>{f === null ? "not marked" : <button type="button" className="font-mono font-semibold underline" onClick={() => onJump(f)}>frame {f}</button>}</dd>
+      <dd>
+        {f === null ? (
+          "not marked"
+        ) : (
+          <button type="button" className="font-mono font-semibold underline" onClick={() => onJump(f)}>
+            frame {f}
+          </button>
+        )}
+      </dd>
     </div>
   );
   return (

@@ -36,7 +36,12 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
   const save = useSaveMarks(id, drop?.myDraft?.id ?? null);
   const marks = useMemo(() => (drop ? marksOf(drop) : []), [drop]);
 
-  if (q.isPending) return <p role="status" className="text-ink-600">Loading the drop…</p>;
+  if (q.isPending)
+    return (
+      <p role="status" className="text-ink-600">
+        Loading the drop…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const d = q.data;
   const settled = d.state !== null && !isBeingRead(d.state);
@@ -75,16 +80,28 @@ export function ReadingRoom({ id, canRead }: { id: string; canRead: boolean }) {
             >
               {canMark && (
                 <>
-                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("dispenseFrame")}>Mark dispense (D)</Button>
-                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("clearFrame")}>Mark clear (E)</Button>
+                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("dispenseFrame")}>
+                    Mark dispense (D)
+                  </Button>
+                  <Button {...markButtonProps(gate.seen, save.isPending)} onClick={() => mark("clearFrame")}>
+                    Mark clear (E)
+                  </Button>
                   <MarkStatus refused={gate.refused} />
                 </>
               )}
             </FramePlayer>
           ) : (
-            d.clip?.status === "ready" && <p role="status" className="text-ink-600">Loading the clip…</p>
+            d.clip?.status === "ready" && (
+              <p role="status" className="text-ink-600">
+                Loading the clip…
+              </p>
+            )
           )}
-          {save.error && <div className="mt-3"><Notice tone="error">{save.error.message}</Notice></div>}
+          {save.error && (
+            <div className="mt-3">
+              <Notice tone="error">{save.error.message}</Notice>
+            </div>
+          )}
         </div>
         <aside aria-label="Your reading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
           <h2 className="text-xl font-semibold">Your reading</h2>

@@ -26,7 +26,9 @@ export function AcceptForm({ runId }: { runId: string }) {
 
   return (
     <form onSubmit={onSubmit} noValidate aria-labelledby="accept-heading" className="space-y-3 rounded-lg border border-wick-300 bg-white p-5 shadow-sm">
-      <h3 id="accept-heading" className="text-lg font-semibold">Accept anyway</h3>
+      <h3 id="accept-heading" className="text-lg font-semibold">
+        Accept anyway
+      </h3>
       <p className="text-sm text-ink-600">
         Accepting keeps the run in the results despite the warnings above. Your name, the time and the reason are recorded with it.
       </p>
@@ -40,7 +42,9 @@ export function AcceptForm({ runId }: { runId: string }) {
         error={own ?? err?.fields.reason}
       />
       {err && <Notice tone="error">{err.message}</Notice>}
-      <Button type="submit" disabled={accept.isPending}>{accept.isPending ? "Accepting…" : "Accept anyway"}</Button>
+      <Button type="submit" disabled={accept.isPending}>
+        {accept.isPending ? "Accepting…" : "Accept anyway"}
+      </Button>
     </form>
   );
 }

@@ -15,10 +15,18 @@ export function ClipList({ clips }: { clips: ClipView[] }) {
         <caption className="sr-only">Recordings of this run</caption>
         <thead className="bg-ink-50 text-ink-600">
           <tr>
-            <th scope="col" className="px-3 py-2">Recording</th>
-            <th scope="col" className="px-3 py-2">Size</th>
-            <th scope="col" className="px-3 py-2">Status</th>
-            <th scope="col" className="px-3 py-2">Added</th>
+            <th scope="col" className="px-3 py-2">
+              Recording
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Size
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Status
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Added
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -34,8 +42,12 @@ export function ClipList({ clips }: { clips: ClipView[] }) {
                   {problem && <p className="mt-0.5 text-bad-700">{problem}</p>}
                 </th>
                 <td className="whitespace-nowrap px-3 py-2">{formatBytes(c.storedSize ?? c.declaredSize)}</td>
-                <td className="px-3 py-2"><ClipStatusBadge status={c.status} /></td>
-                <td className="whitespace-nowrap px-3 py-2"><LocalTime iso={c.createdAt} /></td>
+                <td className="px-3 py-2">
+                  <ClipStatusBadge status={c.status} />
+                </td>
+                <td className="whitespace-nowrap px-3 py-2">
+                  <LocalTime iso={c.createdAt} />
+                </td>
               </tr>
             );
           })}

@@ -11,11 +11,15 @@ export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView
   const name = `Drop ${drop.ordinal}`;
   return (
     <tr className="border-t border-ink-100 align-top">
-      <th scope="row" className="whitespace-nowrap px-3 py-3 font-semibold">{name}</th>
+      <th scope="row" className="whitespace-nowrap px-3 py-3 font-semibold">
+        {name}
+      </th>
       <td className="px-3 py-3">
         {drop.clip ? (
           <>
-            <Link href={`/clips/${drop.clip.id}`} className="break-all font-semibold text-wick-700 underline">{drop.clip.name}</Link>
+            <Link href={`/clips/${drop.clip.id}`} className="break-all font-semibold text-wick-700 underline">
+              {drop.clip.name}
+            </Link>
             {drop.placedByName && <p className="mt-0.5 text-xs text-ink-600">placed by {drop.placedByName}</p>}
           </>
         ) : (
@@ -23,7 +27,9 @@ export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView
         )}
       </td>
       <td className="whitespace-nowrap px-3 py-3">{drop.startFrame === null ? "—" : groupDigits(drop.startFrame)}</td>
-      <td className="px-3 py-3"><DropState drop={drop} /></td>
+      <td className="px-3 py-3">
+        <DropState drop={drop} />
+      </td>
       {canEdit && (
         <td className="px-3 py-2">
           {readyClips.length > 0 ? <PlaceDropForm drop={drop} readyClips={readyClips} /> : <span className="text-ink-600">no recording ready yet</span>}
@@ -32,7 +38,9 @@ export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView
       {canRead && (
         <td className="whitespace-nowrap px-3 py-3">
           {drop.clip && (
-            <Link href={`/drops/${drop.id}`} aria-label={`Read ${name.toLowerCase()}`} className="font-semibold text-wick-700 underline">Read</Link>
+            <Link href={`/drops/${drop.id}`} aria-label={`Read ${name.toLowerCase()}`} className="font-semibold text-wick-700 underline">
+              Read
+            </Link>
           )}
         </td>
       )}

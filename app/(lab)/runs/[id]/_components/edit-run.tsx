@@ -10,7 +10,9 @@ export function EditRun({ run, onSaved }: { run: RunDetail; onSaved: () => void 
   return (
     <div className="space-y-4">
       {run.acceptedAt && (
-        <Notice tone="warn">Saving new conditions withdraws the acceptance by {run.acceptedByName}; a lead must look at the run again if it is still flagged.</Notice>
+        <Notice tone="warn">
+          Saving new conditions withdraws the acceptance by {run.acceptedByName}; a lead must look at the run again if it is still flagged.
+        </Notice>
       )}
       <RunForm defaults={runDefaults(run)} submitLabel="Save conditions" save={(body) => update.mutateAsync(body).then(onSaved)} />
     </div>

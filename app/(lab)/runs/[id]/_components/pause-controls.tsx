@@ -15,7 +15,14 @@ const parts = (n: number) => (n === 1 ? "the part in flight" : `the ${n} parts i
 export function PauseControls({ job, uploads, named }: { job: UploadJob; uploads: Uploads; named: ReactNode }) {
   const hintId = useId();
   const inFlightSent = Math.max(0, job.sentBytes - job.storedBytes);
-  if (job.stage === "paused") return <div className="flex flex-wrap gap-2"><Button type="button" onClick={() => uploads.resume(job.key)}>Resume{named}</Button></div>;
+  if (job.stage === "paused")
+    return (
+      <div className="flex flex-wrap gap-2">
+        <Button type="button" onClick={() => uploads.resume(job.key)}>
+          Resume{named}
+        </Button>
+      </div>
+    );
   if (job.stage === "pausing") {
     return (
       <div className="space-y-2">
@@ -30,9 +37,12 @@ export function PauseControls({ job, uploads, named }: { job: UploadJob; uploads
   }
   return (
     <div className="space-y-1">
-      <Button type="button" kind="secondary" onClick={() => uploads.pause(job.key)} disabled={job.stage === "completing"} aria-describedby={hintId}>Pause{named}</Button>
+      <Button type="button" kind="secondary" onClick={() => uploads.pause(job.key)} disabled={job.stage === "completing"} aria-describedby={hintId}>
+        Pause{named}
+      </Button>
       <p id={hintId} className="text-xs text-ink-600">
-        Pause finishes {job.partsInFlight > 0 ? parts(job.partsInFlight) : "any part in flight"} first and keeps every stored part; no new part is started until you resume.
+        Pause finishes {job.partsInFlight > 0 ? parts(job.partsInFlight) : "any part in flight"} first and keeps every stored part; no new part is started until
+        you resume.
       </p>
     </div>
   );

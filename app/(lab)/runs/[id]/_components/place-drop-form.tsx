@@ -46,11 +46,15 @@ export function PlaceDropForm({ drop, readyClips }: { drop: DropView; readyClips
         <SelectField id={`${id}-clip`} label="Recording" value={clipId} error={err?.fields.clipId} onChange={edited(setPicked)}>
           <option value="">Choose…</option>
           {readyClips.map((c) => (
-            <option key={c.id} value={c.id}>{c.originalName}</option>
+            <option key={c.id} value={c.id}>
+              {c.originalName}
+            </option>
           ))}
         </SelectField>
         <div className="space-y-1">
-          <label htmlFor={frameId} className="block text-sm font-semibold text-ink-800">Start frame</label>
+          <label htmlFor={frameId} className="block text-sm font-semibold text-ink-800">
+            Start frame
+          </label>
           <input
             id={frameId}
             type="number"
@@ -71,8 +75,16 @@ export function PlaceDropForm({ drop, readyClips }: { drop: DropView; readyClips
       </div>
       {/* Under the whole row, so a long refusal reads on one or two lines rather than in the narrow column. */}
       <FieldMessages id={frameId} error={frameError} hint={frames} />
-      {general && <p role="alert" className="text-sm text-bad-700">{general}</p>}
-      {place.isSuccess && <p role="status" className="text-sm text-ok-700">Saved.</p>}
+      {general && (
+        <p role="alert" className="text-sm text-bad-700">
+          {general}
+        </p>
+      )}
+      {place.isSuccess && (
+        <p role="status" className="text-sm text-ok-700">
+          Saved.
+        </p>
+      )}
     </form>
   );
 }

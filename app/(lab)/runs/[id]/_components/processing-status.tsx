@@ -10,7 +10,12 @@ import { ClipSteps } from "@/app/(lab)/_shared/clips/clip-steps";
 /** After the last part: the server's processing steps, live, until the clip is ready or refused. */
 export function ProcessingStatus({ clipId, onDismiss }: { clipId: string; onDismiss: () => void }) {
   const q = useClip(clipId);
-  if (q.isPending) return <p role="status" className="text-sm">Stored. Waiting for processing to start…</p>;
+  if (q.isPending)
+    return (
+      <p role="status" className="text-sm">
+        Stored. Waiting for processing to start…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const clip = q.data;
   const problem = clipProblem(clip);
@@ -19,7 +24,9 @@ export function ProcessingStatus({ clipId, onDismiss }: { clipId: string; onDism
     <div className="space-y-2">
       <p className="flex flex-wrap items-center gap-2 text-sm">
         Stored in full. <ClipStatusBadge status={clip.status} />
-        <Link href={`/clips/${clip.id}`} className="font-semibold text-wick-700 underline">Open the clip page</Link>
+        <Link href={`/clips/${clip.id}`} className="font-semibold text-wick-700 underline">
+          Open the clip page
+        </Link>
       </p>
       <ClipSteps steps={clip.steps} label={`Processing steps of ${clip.originalName}`} />
       {problem && <p className="text-sm text-bad-700">{problem}</p>}

@@ -15,8 +15,14 @@ export function Recordings({ runId, canUpload }: { runId: string; canUpload: boo
 
   return (
     <section aria-labelledby="recordings-heading" className="space-y-4">
-      <h2 id="recordings-heading" className="text-xl font-semibold">Recordings</h2>
-      {clips.isPending && <p className="text-ink-600" role="status">Loading the recordings…</p>}
+      <h2 id="recordings-heading" className="text-xl font-semibold">
+        Recordings
+      </h2>
+      {clips.isPending && (
+        <p className="text-ink-600" role="status">
+          Loading the recordings…
+        </p>
+      )}
       {clips.isError && <Notice tone="error">{clips.error.message}</Notice>}
       {clips.data && <ClipList clips={clips.data} />}
       {canUpload && clips.data && <ResumeOffers runId={runId} clips={clips.data} active={active} onResume={uploads.adopt} />}

@@ -55,7 +55,10 @@ function ResumeOffer({ clip, kept, onResume }: { clip: ClipView; kept: Kept | un
 
   function onPick(file: File | undefined) {
     if (!file) return;
-    if (!sameFile(file, want)) return setError(`That is not the same file: ${file.name} (${formatBytes(file.size)}). This upload needs ${clip.originalName}, ${formatBytes(clip.declaredSize)}${kept ? ", last changed when it was first picked" : ""}.`);
+    if (!sameFile(file, want))
+      return setError(
+        `That is not the same file: ${file.name} (${formatBytes(file.size)}). This upload needs ${clip.originalName}, ${formatBytes(clip.declaredSize)}${kept ? ", last changed when it was first picked" : ""}.`,
+      );
     setError(null);
     onResume(clip.id, file, false);
   }
@@ -72,12 +75,21 @@ function ResumeOffer({ clip, kept, onResume }: { clip: ClipView; kept: Kept | un
         </Button>
       ) : (
         <div className="space-y-1">
-          <p>{kept ? "The browser can no longer read the file it kept (it may have been moved or changed)." : "This browser does not hold the file."} Pick the same file again to resume.</p>
-          <label htmlFor={inputId} className="block font-semibold">Pick {clip.originalName} again</label>
+          <p>
+            {kept ? "The browser can no longer read the file it kept (it may have been moved or changed)." : "This browser does not hold the file."} Pick the
+            same file again to resume.
+          </p>
+          <label htmlFor={inputId} className="block font-semibold">
+            Pick {clip.originalName} again
+          </label>
           <input id={inputId} type="file" onChange={(e) => onPick(e.target.files?.[0])} className="block text-sm" />
         </div>
       )}
-      {error && <p role="alert" className="text-bad-700">{error}</p>}
+      {error && (
+        <p role="alert" className="text-bad-700">
+          {error}
+        </p>
+      )}
     </li>
   );
 }

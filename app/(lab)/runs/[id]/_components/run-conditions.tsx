@@ -14,7 +14,10 @@ export function RunConditions({ run }: { run: RunView }) {
     { label: "Tested at", value: formatInstant(run.testedAt) },
     { label: "Room temperature", value: formatTemperature(run.roomTempC) },
     { label: "Surface temperature", value: formatTemperature(run.surfaceTempC) },
-    { label: "Acclimation before the test", value: run.acclimationH === null ? <span className="text-wick-700">not recorded</span> : `${run.acclimationH.toFixed(1)} h` },
+    {
+      label: "Acclimation before the test",
+      value: run.acclimationH === null ? <span className="text-wick-700">not recorded</span> : `${run.acclimationH.toFixed(1)} h`,
+    },
     { label: "Preparation method", value: run.prepMethod },
     { label: "Abrasive", value: orNone(run.prepAbrasive) },
     { label: "Pad cycle position", value: orNone(run.prepPadPosition) },

@@ -17,7 +17,12 @@ import { VoidForm } from "./void-form";
 export function RunDetail({ id, canEdit, isLead, isReviewer }: { id: string; canEdit: boolean; isLead: boolean; isReviewer: boolean }) {
   const q = useRun(id);
   const [editing, setEditing] = useState(false);
-  if (q.isPending) return <p className="text-ink-600" role="status">Loading the run…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Loading the run…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const run = q.data;
   // A signed-off submission, or a voided run, takes no change: no form that would only be refused.
@@ -27,19 +32,26 @@ export function RunDetail({ id, canEdit, isLead, isReviewer }: { id: string; can
   return (
     <div className="space-y-6">
       <div>
-        <Link href={`/submissions/${run.submissionId}`} className="text-sm font-semibold text-wick-700 underline">Back to the submission</Link>
+        <Link href={`/submissions/${run.submissionId}`} className="text-sm font-semibold text-wick-700 underline">
+          Back to the submission
+        </Link>
         <p className="mt-2 text-sm font-semibold uppercase tracking-wide text-wick-700">Sample {run.sampleSerial}</p>
         <h1 className="text-3xl font-bold">Run tested {formatInstant(run.testedAt)}</h1>
-        <p className="mt-1 text-ink-600">Recorded by {run.technicianName} · {run.dropCount} drop{run.dropCount === 1 ? "" : "s"}</p>
+        <p className="mt-1 text-ink-600">
+          Recorded by {run.technicianName} · {run.dropCount} drop{run.dropCount === 1 ? "" : "s"}
+        </p>
       </div>
       <RunNotices run={run} />
 
       <section aria-labelledby="warnings-heading" className="space-y-3">
-        <h2 id="warnings-heading" className="text-xl font-semibold">Condition checks</h2>
+        <h2 id="warnings-heading" className="text-xl font-semibold">
+          Condition checks
+        </h2>
         <ConditionWarnings run={run} showWhen />
         {run.needsAcceptance && (
           <Notice tone="warn">
-            These conditions are outside the edition&apos;s limits. The run counts only once a lead accepts it with a reason, or once its conditions are corrected.
+            These conditions are outside the edition&apos;s limits. The run counts only once a lead accepts it with a reason, or once its conditions are
+            corrected.
           </Notice>
         )}
         {isLead && open && run.needsAcceptance && <AcceptForm runId={run.id} />}
@@ -48,16 +60,26 @@ export function RunDetail({ id, canEdit, isLead, isReviewer }: { id: string; can
       {editing && canChange ? (
         <section aria-labelledby="edit-heading" className="space-y-3">
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <h2 id="edit-heading" className="text-xl font-semibold">Edit conditions</h2>
-            <Button kind="secondary" onClick={() => setEditing(false)}>Cancel editing</Button>
+            <h2 id="edit-heading" className="text-xl font-semibold">
+              Edit conditions
+            </h2>
+            <Button kind="secondary" onClick={() => setEditing(false)}>
+              Cancel editing
+            </Button>
           </div>
           <EditRun run={run} onSaved={() => setEditing(false)} />
         </section>
       ) : (
         <section aria-labelledby="conditions-heading" className="space-y-3 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <h2 id="conditions-heading" className="text-xl font-semibold">Conditions</h2>
-            {canChange && <Button kind="secondary" onClick={() => setEditing(true)}>Edit conditions</Button>}
+            <h2 id="conditions-heading" className="text-xl font-semibold">
+              Conditions
+            </h2>
+            {canChange && (
+              <Button kind="secondary" onClick={() => setEditing(true)}>
+                Edit conditions
+              </Button>
+            )}
           </div>
           <RunConditions run={run} />
         </section>
@@ -84,7 +106,10 @@ function RunNotices({ run }: { run: RunDetailData }) {
       {run.voidedAt && (
         <div data-testid="void-notice">
           <Notice tone="warn">
-            <strong>Voided by {run.voidedByName} on {formatInstant(run.voidedAt)}.</strong> It no longer counts. Reason: {run.voidReason}
+            <strong>
+              Voided by {run.voidedByName} on {formatInstant(run.voidedAt)}.
+            </strong>{" "}
+            It no longer counts. Reason: {run.voidReason}
           </Notice>
         </div>
       )}

@@ -17,7 +17,12 @@ export function UploadProgress({ job }: { job: UploadJob }) {
       <ProgressBar label={`Upload of ${job.file.name}`} value={job.sentBytes} max={total} valueText={sent} tone={paused ? "paused" : "active"} />
       <p className="text-sm tabular-nums text-ink-800">
         {sent}
-        {job.stage === "sending" && !w && <> · {formatSpeed(job.speed)} · {formatDuration(job.secondsLeft)} left</>}
+        {job.stage === "sending" && !w && (
+          <>
+            {" "}
+            · {formatSpeed(job.speed)} · {formatDuration(job.secondsLeft)} left
+          </>
+        )}
         {parts && <> · {parts}</>}
       </p>
       <p className="text-sm text-ink-600" aria-live="polite">
@@ -25,7 +30,10 @@ export function UploadProgress({ job }: { job: UploadJob }) {
         {job.stage === "completing" && "All parts are sent; storage is joining them into one file…"}
         {w?.kind === "offline" && "The network is down. Waiting for it to come back; the parts already stored are kept."}
         {w?.kind === "retry" && `Part ${w.partNumber} did not go through (${w.error}). Trying again in ${w.seconds} s.`}
-        {job.kept === false && !paused && job.stage === "sending" && " This browser cannot keep the file: if the page is closed, pick the same file again to resume."}
+        {job.kept === false &&
+          !paused &&
+          job.stage === "sending" &&
+          " This browser cannot keep the file: if the page is closed, pick the same file again to resume."}
       </p>
     </div>
   );

@@ -36,15 +36,22 @@ export function UploadRow({ job, uploads }: { job: UploadJob; uploads: Uploads }
           <div className="space-y-2">
             {!canTrimInBrowser(f.size) && f.size > 0 && (
               <p className="text-sm">
-                At {formatBytes(f.size)} this file is too large to trim in the browser, which would have to hold it in memory (the limit is {formatBytes(TRIM_MAX_BYTES)}). It is uploaded whole.
+                At {formatBytes(f.size)} this file is too large to trim in the browser, which would have to hold it in memory (the limit is{" "}
+                {formatBytes(TRIM_MAX_BYTES)}). It is uploaded whole.
               </p>
             )}
             <div className="flex flex-wrap gap-2">
-              <Button type="button" onClick={() => void uploads.start(job.key)}>Upload whole file{named}</Button>
+              <Button type="button" onClick={() => void uploads.start(job.key)}>
+                Upload whole file{named}
+              </Button>
               {canTrimInBrowser(f.size) && (
-                <Button type="button" kind="secondary" onClick={() => setTrimming(true)}>Trim first{named}</Button>
+                <Button type="button" kind="secondary" onClick={() => setTrimming(true)}>
+                  Trim first{named}
+                </Button>
               )}
-              <Button type="button" kind="secondary" onClick={() => uploads.dismiss(job.key)}>Remove from the list{named}</Button>
+              <Button type="button" kind="secondary" onClick={() => uploads.dismiss(job.key)}>
+                Remove from the list{named}
+              </Button>
             </div>
           </div>
         )}
@@ -60,7 +67,11 @@ export function UploadRow({ job, uploads }: { job: UploadJob; uploads: Uploads }
           />
         )}
 
-        {job.stage === "starting" && <p role="status" className="text-sm">Starting the upload…</p>}
+        {job.stage === "starting" && (
+          <p role="status" className="text-sm">
+            Starting the upload…
+          </p>
+        )}
         {sending && job.stage !== "starting" && (
           <>
             <UploadProgress job={job} />
@@ -70,8 +81,12 @@ export function UploadRow({ job, uploads }: { job: UploadJob; uploads: Uploads }
 
         {job.stage === "rejected" && (
           <div className="space-y-2">
-            <p role="alert" className="text-sm text-bad-700">Refused: {job.rejectReason}</p>
-            <Button type="button" kind="secondary" onClick={() => uploads.dismiss(job.key)}>Remove from the list{named}</Button>
+            <p role="alert" className="text-sm text-bad-700">
+              Refused: {job.rejectReason}
+            </p>
+            <Button type="button" kind="secondary" onClick={() => uploads.dismiss(job.key)}>
+              Remove from the list{named}
+            </Button>
           </div>
         )}
         {job.stage === "processing" && job.clipId && <ProcessingStatus clipId={job.clipId} onDismiss={() => uploads.dismiss(job.key)} />}

@@ -19,7 +19,9 @@ export function Uploader({ uploads }: { uploads: Uploads }) {
         </p>
       </div>
       <div className="space-y-1">
-        <label htmlFor="clip-files" className="block text-sm font-semibold text-ink-800">Video files to upload</label>
+        <label htmlFor="clip-files" className="block text-sm font-semibold text-ink-800">
+          Video files to upload
+        </label>
         <input
           id="clip-files"
           type="file"
@@ -32,7 +34,9 @@ export function Uploader({ uploads }: { uploads: Uploads }) {
           }}
           className="block w-full text-sm file:mr-3 file:rounded-md file:border file:border-ink-200 file:bg-ink-50 file:px-3 file:py-2 file:font-semibold"
         />
-        <p id="clip-files-hint" className="text-xs text-ink-600">Pick one or more files. Each waits for you to upload it whole or trim it first.</p>
+        <p id="clip-files-hint" className="text-xs text-ink-600">
+          Pick one or more files. Each waits for you to upload it whole or trim it first.
+        </p>
       </div>
       {waiting.length > 1 && (
         <Button type="button" onClick={() => waiting.forEach((j) => void uploads.start(j.key))}>

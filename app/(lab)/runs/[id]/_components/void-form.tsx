@@ -28,14 +28,26 @@ export function VoidForm({ runId }: { runId: string }) {
   return (
     <section aria-labelledby="void-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
       <form onSubmit={onSubmit} noValidate className="space-y-3">
-        <h2 id="void-heading" className="text-xl font-semibold">Void this run</h2>
+        <h2 id="void-heading" className="text-xl font-semibold">
+          Void this run
+        </h2>
         <p className="max-w-3xl text-sm text-ink-600">
-          For a run that must not count, such as one recorded on the wrong ball. The run and its drops stay on record, marked voided with
-          your name, the time and the reason; the ball&apos;s run before it counts again. A void cannot be undone.
+          For a run that must not count, such as one recorded on the wrong ball. The run and its drops stay on record, marked voided with your name, the time
+          and the reason; the ball&apos;s run before it counts again. A void cannot be undone.
         </p>
-        <TextareaField id="void-reason" label="Reason for voiding" value={reason} onChange={(e) => setReason(e.target.value)} maxLength={1000} required error={own ?? err?.fields.reason} />
+        <TextareaField
+          id="void-reason"
+          label="Reason for voiding"
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          maxLength={1000}
+          required
+          error={own ?? err?.fields.reason}
+        />
         {err && <Notice tone="error">{err.message}</Notice>}
-        <Button type="submit" kind="danger" disabled={voiding.isPending}>{voiding.isPending ? "Voiding…" : "Void this run"}</Button>
+        <Button type="submit" kind="danger" disabled={voiding.isPending}>
+          {voiding.isPending ? "Voiding…" : "Void this run"}
+        </Button>
       </form>
     </section>
   );

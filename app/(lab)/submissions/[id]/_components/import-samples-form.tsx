@@ -44,31 +44,65 @@ export function ImportSamplesForm({ submissionId, currentRound }: { submissionId
     const round = Number(data.get("round")) || undefined;
     upload.mutate(
       { csv, unit: data.get("unit") as "g" | "oz" | "lb", round, receivedAt: receivedAt! },
-      { onSuccess: (r) => { setDone(`${r.created} sample${r.created === 1 ? " was" : "s were"} imported.`); setCsv(""); } },
+      {
+        onSuccess: (r) => {
+          setDone(`${r.created} sample${r.created === 1 ? " was" : "s were"} imported.`);
+          setCsv("");
+        },
+      },
     );
   }
 
   return (
     <section aria-labelledby="import-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="import-heading" className="text-lg font-semibold">Import samples from CSV</h2>
+      <h2 id="import-heading" className="text-lg font-semibold">
+        Import samples from CSV
+      </h2>
       <p className="mt-1 text-sm text-ink-600">
-        One row per ball: serial and weight, optionally unit, received_at, acclimation_started_at and notes. A header row is optional. If any row is wrong, nothing is saved.
+        One row per ball: serial and weight, optionally unit, received_at, acclimation_started_at and notes. A header row is optional. If any row is wrong,
+        nothing is saved.
       </p>
       <form onSubmit={onSubmit} noValidate className="mt-4 grid gap-4 md:grid-cols-2">
         <div className="md:col-span-2">
-          <TextareaField id="import-csv" label="CSV rows" rows={6} value={csv} onChange={(e) => setCsv(e.target.value)} placeholder={EXAMPLE} spellCheck={false} className="block w-full rounded-md border border-ink-200 bg-white px-3 py-2 font-mono text-sm" error={fields.csv} />
+          <TextareaField
+            id="import-csv"
+            label="CSV rows"
+            rows={6}
+            value={csv}
+            onChange={(e) => setCsv(e.target.value)}
+            placeholder={EXAMPLE}
+            spellCheck={false}
+            className="block w-full rounded-md border border-ink-200 bg-white px-3 py-2 font-mono text-sm"
+            error={fields.csv}
+          />
         </div>
         <Field id="import-file" type="file" label="Or choose a CSV file" accept=".csv,text/csv,text/plain" onChange={onFile} error={fields.file} />
         <SelectField id="import-unit" name="unit" label="Weight unit for rows without one" defaultValue="g" error={fields.unit}>
-          {MASS_UNITS.map((u) => <option key={u.value} value={u.value}>{u.label}</option>)}
+          {MASS_UNITS.map((u) => (
+            <option key={u.value} value={u.value}>
+              {u.label}
+            </option>
+          ))}
         </SelectField>
         <Field id="import-received" name="receivedAt" type="datetime-local" label="Received at" defaultValue={localInput()} error={fields.receivedAt} />
-        <Field id="import-round" name="round" type="number" min={1} step={1} label="Round" placeholder={String(currentRound)} hint={`Blank means the current round, ${currentRound}.`} error={fields.round} />
+        <Field
+          id="import-round"
+          name="round"
+          type="number"
+          min={1}
+          step={1}
+          label="Round"
+          placeholder={String(currentRound)}
+          hint={`Blank means the current round, ${currentRound}.`}
+          error={fields.round}
+        />
         <div className="space-y-3 md:col-span-2">
           {err && <Notice tone="error">{err.message}</Notice>}
           {err && <CsvRowErrors fields={err.fields} />}
           {done && <Notice tone="ok">{done}</Notice>}
-          <Button type="submit" disabled={upload.isPending}>{upload.isPending ? "Importing…" : "Import samples"}</Button>
+          <Button type="submit" disabled={upload.isPending}>
+            {upload.isPending ? "Importing…" : "Import samples"}
+          </Button>
         </div>
       </form>
     </section>

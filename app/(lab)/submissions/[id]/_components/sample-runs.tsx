@@ -15,7 +15,10 @@ export function SampleRuns({ serial, runs }: { serial: string; runs: RunView[] }
             <Link href={`/runs/${r.id}`} className="font-semibold text-wick-700 underline">
               Run tested {formatInstant(r.testedAt)}
             </Link>
-            <span className="text-ink-600"> · by {r.technicianName} · surface {formatTemperature(r.surfaceTempC)}</span>
+            <span className="text-ink-600">
+              {" "}
+              · by {r.technicianName} · surface {formatTemperature(r.surfaceTempC)}
+            </span>
             {r.voidedAt && <span className="ml-2 rounded bg-ink-100 px-1.5 py-0.5 text-xs font-semibold uppercase text-ink-700">Voided</span>}
           </p>
           {r.voidedAt ? (

@@ -10,7 +10,12 @@ import { SubmissionSummary } from "./submission-summary";
 
 export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean }) {
   const q = useSubmission(id);
-  if (q.isPending) return <p className="text-ink-600" role="status">Loading the submission…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Loading the submission…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   if (q.data.view !== "staff") return <Notice tone="error">This page is for laboratory staff.</Notice>;
   const { submission, edition, rounds, flaggedRuns, signOff } = q.data;
@@ -30,7 +35,9 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
         </Notice>
       )}
       <section aria-labelledby="samples-heading" className="space-y-4">
-        <h2 id="samples-heading" className="text-xl font-semibold">Samples</h2>
+        <h2 id="samples-heading" className="text-xl font-semibold">
+          Samples
+        </h2>
         {sampleCount === 0 && <p className="text-ink-600">No sample balls are recorded yet.</p>}
         {rounds.map((r) => (
           <RoundSamples key={r.round} round={r.round} samples={r.samples} canEdit={canChange} />
@@ -43,7 +50,13 @@ export function SubmissionDetail({ id, canEdit }: { id: string; canEdit: boolean
         </div>
       )}
       {/* After the sample forms: the requests load on their own, and must not push a form the technician is typing into. */}
-      <SampleRequestsPanel submissionId={submission.id} currentRound={submission.currentRound} weights={submission.weightClassesLb} canEdit={canChange} waiting={submission.status === "awaiting_samples"} />
+      <SampleRequestsPanel
+        submissionId={submission.id}
+        currentRound={submission.currentRound}
+        weights={submission.weightClassesLb}
+        canEdit={canChange}
+        waiting={submission.status === "awaiting_samples"}
+      />
     </div>
   );
 }

@@ -17,10 +17,26 @@ export function SubmissionSummary({ submission: s, edition, signOff }: Pick<Staf
     { label: "Current round", value: s.currentRound },
     { label: "Results revision", value: `${signOff.revision}${signOff.locked ? " (signed off)" : ""}` },
     { label: "Received", value: formatDay(s.receivedOn) },
-    { label: "Specification edition", value: <Link href={`/editions/${edition.id}`} className={link}>{edition.name}</Link> },
+    {
+      label: "Specification edition",
+      value: (
+        <Link href={`/editions/${edition.id}`} className={link}>
+          {edition.name}
+        </Link>
+      ),
+    },
     { label: "Weight classes", value: s.weightClassesLb.length ? s.weightClassesLb.map((lb) => `${lb} lb`).join(", ") : "not given" },
     ...(s.approvalSubmissionId
-      ? [{ label: "Approval submission", value: <Link href={`/submissions/${s.approvalSubmissionId}`} className={link}>{s.approvalReference}</Link> }]
+      ? [
+          {
+            label: "Approval submission",
+            value: (
+              <Link href={`/submissions/${s.approvalSubmissionId}`} className={link}>
+                {s.approvalReference}
+              </Link>
+            ),
+          },
+        ]
       : []),
   ];
   return (
@@ -30,7 +46,9 @@ export function SubmissionSummary({ submission: s, edition, signOff }: Pick<Staf
           <p className="text-sm font-semibold uppercase tracking-wide text-wick-700">Submission {s.reference}</p>
           <h1 className="text-3xl font-bold">{s.modelName}</h1>
         </div>
-        <Link href={`/submissions/${s.id}/results`} className="rounded-md bg-wick-600 px-4 py-2 font-semibold text-white hover:bg-wick-700">Results and decision</Link>
+        <Link href={`/submissions/${s.id}/results`} className="rounded-md bg-wick-600 px-4 py-2 font-semibold text-white hover:bg-wick-700">
+          Results and decision
+        </Link>
       </div>
       {signOff.locked && (
         <p data-testid="lock-notice" className="rounded-md bg-ok-100 px-3 py-2 text-sm font-semibold text-ok-700">
@@ -38,9 +56,7 @@ export function SubmissionSummary({ submission: s, edition, signOff }: Pick<Staf
         </p>
       )}
       <DetailList items={items} />
-      <p className="text-sm text-ink-600">
-        Judged against {editionInBrief(edition)}
-      </p>
+      <p className="text-sm text-ink-600">Judged against {editionInBrief(edition)}</p>
       {s.notes && <p className="whitespace-pre-wrap text-sm text-ink-800">{s.notes}</p>}
     </header>
   );

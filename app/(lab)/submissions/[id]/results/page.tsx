@@ -12,7 +12,9 @@ export default async function SubmissionResultsPage({ params }: { params: Promis
   return (
     <div className="space-y-6">
       <p>
-        <Link href={`/submissions/${id}`} className="text-sm font-semibold text-wick-700 underline">Back to the submission</Link>
+        <Link href={`/submissions/${id}`} className="text-sm font-semibold text-wick-700 underline">
+          Back to the submission
+        </Link>
       </p>
       <ResultsPanel id={id} signOff={hasRole(actor, "lead") ? <SignoffPanel submissionId={id} /> : undefined} />
     </div>

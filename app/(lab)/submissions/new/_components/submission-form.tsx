@@ -29,9 +29,24 @@ export function SubmissionForm() {
   const router = useRouter();
   const create = useCreateSubmission();
   const organisations = useOrganisationList();
-  const { register, handleSubmit, watch, setError, setValue, formState: { errors } } = useForm<SubmissionInput, unknown, SubmissionValues>({
+  const {
+    register,
+    handleSubmit,
+    watch,
+    setError,
+    setValue,
+    formState: { errors },
+  } = useForm<SubmissionInput, unknown, SubmissionValues>({
     resolver: zodResolver(submissionInputSchema),
-    defaultValues: { organisationId: "", modelName: "", kind: "approval", weightClassesLb: [], receivedOn: todayInput(), approvalSubmissionId: null, notes: "" },
+    defaultValues: {
+      organisationId: "",
+      modelName: "",
+      kind: "approval",
+      weightClassesLb: [],
+      receivedOn: todayInput(),
+      approvalSubmissionId: null,
+      notes: "",
+    },
   });
   const kind = watch("kind");
   const organisationId = watch("organisationId");
@@ -45,7 +60,12 @@ export function SubmissionForm() {
   );
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="New submission" className="grid gap-5 rounded-lg border border-ink-100 bg-white p-5 shadow-sm md:grid-cols-2">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label="New submission"
+      className="grid gap-5 rounded-lg border border-ink-100 bg-white p-5 shadow-sm md:grid-cols-2"
+    >
       <SelectField
         id="sub-organisation"
         label="Organisation"
@@ -53,17 +73,35 @@ export function SubmissionForm() {
         {...register("organisationId", { onChange: () => setValue("approvalSubmissionId", null) })}
       >
         <option value="">Choose…</option>
-        {organisations.data?.map((o) => <option key={o.id} value={o.id}>{o.name}</option>)}
+        {organisations.data?.map((o) => (
+          <option key={o.id} value={o.id}>
+            {o.name}
+          </option>
+        ))}
       </SelectField>
       <Field id="sub-model" label="Model name" maxLength={120} error={errors.modelName?.message} {...register("modelName")} />
       <Fieldset id="sub-kind" legend="Kind" error={errors.kind?.message} hint={KIND_HINTS[kind]} className="md:col-span-2">
-        {KINDS.map((k) => <Choice key={k} type="radio" value={k} label={KIND_LABELS[k]} {...register("kind")} />)}
+        {KINDS.map((k) => (
+          <Choice key={k} type="radio" value={k} label={KIND_LABELS[k]} {...register("kind")} />
+        ))}
       </Fieldset>
       {kind === "surveillance" && (
-        <ApprovalSelect organisationId={organisationId} error={errors.approvalSubmissionId?.message} registration={register("approvalSubmissionId", { setValueAs: (v) => v || null })} />
+        <ApprovalSelect
+          organisationId={organisationId}
+          error={errors.approvalSubmissionId?.message}
+          registration={register("approvalSubmissionId", { setValueAs: (v) => v || null })}
+        />
       )}
-      <Fieldset id="sub-weights" legend="Weight classes (lb)" error={firstMessage(errors.weightClassesLb)} hint="The weights this model is made in." className="md:col-span-2">
-        {WEIGHT_CLASSES.map((lb) => <Choice key={lb} type="checkbox" value={lb} label={`${lb} lb`} {...register("weightClassesLb")} />)}
+      <Fieldset
+        id="sub-weights"
+        legend="Weight classes (lb)"
+        error={firstMessage(errors.weightClassesLb)}
+        hint="The weights this model is made in."
+        className="md:col-span-2"
+      >
+        {WEIGHT_CLASSES.map((lb) => (
+          <Choice key={lb} type="checkbox" value={lb} label={`${lb} lb`} {...register("weightClassesLb")} />
+        ))}
       </Fieldset>
       <Field id="sub-received" label="Received on" type="date" error={errors.receivedOn?.message} {...register("receivedOn")} />
       <div className="md:col-span-2">
@@ -71,7 +109,9 @@ export function SubmissionForm() {
       </div>
       <div className="space-y-3 md:col-span-2">
         {err && <Notice tone="error">{err.message}</Notice>}
-        <Button type="submit" disabled={create.isPending}>{create.isPending ? "Saving…" : "Create submission"}</Button>
+        <Button type="submit" disabled={create.isPending}>
+          {create.isPending ? "Saving…" : "Create submission"}
+        </Button>
       </div>
     </form>
   );

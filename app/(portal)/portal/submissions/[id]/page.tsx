@@ -10,7 +10,9 @@ export default async function PortalSubmissionPage({ params }: { params: Promise
   return (
     <div className="space-y-6">
       <p>
-        <Link href="/portal" className="text-sm font-semibold text-wick-700 underline">Back to our submissions</Link>
+        <Link href="/portal" className="text-sm font-semibold text-wick-700 underline">
+          Back to our submissions
+        </Link>
       </p>
       <PortalSubmission id={id} />
       <p className="text-sm text-ink-600">You only ever see your own organisation&apos;s records.</p>

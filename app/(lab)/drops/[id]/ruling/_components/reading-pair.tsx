@@ -6,11 +6,25 @@ import type { DropView, ReadingView } from "@/app/_client/drops";
 import { signedSeconds } from "@/app/(lab)/discrepancies/_components/reading-numbers";
 
 function Column({ title, r, onJump }: { title: string; r: ReadingView | undefined; onJump: (f: number) => void }) {
-  if (!r) return <section className="rounded-lg border border-ink-100 bg-white p-4"><h3 className="font-semibold">{title}</h3><p className="text-ink-600">—</p></section>;
+  if (!r)
+    return (
+      <section className="rounded-lg border border-ink-100 bg-white p-4">
+        <h3 className="font-semibold">{title}</h3>
+        <p className="text-ink-600">—</p>
+      </section>
+    );
   const frame = (label: string, f: number | null) => (
     <div className="flex items-baseline justify-between gap-2">
       <dt className="text-ink-600">{label}</dt>
-      <dd>{f === null ? "—" : <button type="button" className="font-mono font-semibold underline" onClick={() => onJump(f)}>frame {f}</button>}</dd>
+      <dd>
+        {f === null ? (
+          "—"
+        ) : (
+          <button type="button" className="font-mono font-semibold underline" onClick={() => onJump(f)}>
+            frame {f}
+          </button>
+        )}
+      </dd>
     </div>
   );
   return (
@@ -41,8 +55,8 @@ export function ReadingPair({ drop, onJump }: { drop: DropView; onJump: (f: numb
       </div>
       {c && (
         <p className="text-sm" data-testid="difference">
-          Difference (second − first): <strong>{signedSeconds(c.timeDifferenceS)}</strong> in the drop time; dispense {signedSeconds(c.dispenseDifferenceS)}, clear {signedSeconds(c.clearDifferenceS)}.
-          The edition&apos;s tolerance is ±{s(drop.readingToleranceS)}.
+          Difference (second − first): <strong>{signedSeconds(c.timeDifferenceS)}</strong> in the drop time; dispense {signedSeconds(c.dispenseDifferenceS)},
+          clear {signedSeconds(c.clearDifferenceS)}. The edition&apos;s tolerance is ±{s(drop.readingToleranceS)}.
         </p>
       )}
     </div>

@@ -36,25 +36,32 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
     return m;
   }, [drop, third]);
 
-  if (q.isPending || ruling.isPending) return <p role="status" className="text-ink-600">Loading the drop…</p>;
+  if (q.isPending || ruling.isPending)
+    return (
+      <p role="status" className="text-ink-600">
+        Loading the drop…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const d = q.data;
   const party = d.readings.some((r) => r.reviewerId === actorId);
   const open = d.state === "discrepancy" && !ruling.data && !party;
   const markThird = (which: keyof ThirdMarks) =>
     gate.attempt(which === "dispenseFrame" ? "Third reading's dispense" : "Third reading's clear", (f) => setThird((t) => ({ ...t, [which]: f })));
-  const keys = open && choice === "third"
-    ? [
-        { key: "d", label: "Mark the frame on screen as the third reading's dispense frame", run: () => markThird("dispenseFrame") },
-        { key: "e", label: "Mark the frame on screen as the third reading's clear frame", run: () => markThird("clearFrame") },
-      ]
-    : [];
+  const keys =
+    open && choice === "third"
+      ? [
+          { key: "d", label: "Mark the frame on screen as the third reading's dispense frame", run: () => markThird("dispenseFrame") },
+          { key: "e", label: "Mark the frame on screen as the third reading's clear frame", run: () => markThird("clearFrame") },
+        ]
+      : [];
   const jump = (f: number) => control.current?.goToFrame(f);
   return (
     <div className="space-y-6">
       <DropHeader drop={d} />
       <p className="max-w-3xl text-sm text-ink-600">
-        The governing specification and the lab&apos;s own accredited procedure decide how a disagreement is settled; the tolerance shown is the edition&apos;s, an example until the lab sets its own.
+        The governing specification and the lab&apos;s own accredited procedure decide how a disagreement is settled; the tolerance shown is the edition&apos;s,
+        an example until the lab sets its own.
       </p>
       <ReadingPair drop={d} onJump={jump} />
       {clip.data?.playback && frames.data && (
@@ -81,7 +88,9 @@ export function RulingDesk({ id, actorId }: { id: string; actorId: string }) {
           </Notice>
         )}
         {!ruling.data && party && <Notice tone="warn">You read this drop yourself, so you cannot rule on it: another lead must rule.</Notice>}
-        {!ruling.data && !party && d.state !== "discrepancy" && <Notice>This drop is {d.state ?? "being read"}: only a drop whose readings disagree is ruled.</Notice>}
+        {!ruling.data && !party && d.state !== "discrepancy" && (
+          <Notice>This drop is {d.state ?? "being read"}: only a drop whose readings disagree is ruled.</Notice>
+        )}
         {open && <RulingForm dropId={id} choice={choice} onChoice={setChoice} third={third} />}
       </section>
     </div>

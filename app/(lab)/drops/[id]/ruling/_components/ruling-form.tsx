@@ -9,9 +9,16 @@ import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
 
 export type Choice = "first" | "second" | "third";
-export interface ThirdMarks { dispenseFrame: number | null; clearFrame: number | null }
+export interface ThirdMarks {
+  dispenseFrame: number | null;
+  clearFrame: number | null;
+}
 
-const LABELS: Record<Choice, string> = { first: "Accept the first reading", second: "Accept the second reading", third: "Make a third reading (mark it in the player: D and E)" };
+const LABELS: Record<Choice, string> = {
+  first: "Accept the first reading",
+  second: "Accept the second reading",
+  third: "Make a third reading (mark it in the player: D and E)",
+};
 
 /** What is missing, by field, in the server's own words (the same schema): checked before asking to confirm. */
 function missing(input: Record<string, unknown>): Record<string, string> {
@@ -53,7 +60,11 @@ export function RulingForm({ dropId, choice, onChoice, third }: { dropId: string
             {LABELS[c]}
           </label>
         ))}
-        {fields.chosen && <p id="ruling-chosen-error" className="text-sm text-bad-700">{fields.chosen}</p>}
+        {fields.chosen && (
+          <p id="ruling-chosen-error" className="text-sm text-bad-700">
+            {fields.chosen}
+          </p>
+        )}
       </fieldset>
       {choice === "third" && (
         <p className="text-sm" data-testid="third-marks">
@@ -61,9 +72,18 @@ export function RulingForm({ dropId, choice, onChoice, third }: { dropId: string
           {marksMissing && <span className="block text-bad-700">{marksMissing}</span>}
         </p>
       )}
-      <TextareaField id="ruling-reason" label="Reason for the ruling" value={reason} onChange={(e) => setReason(e.target.value)} error={fields.reason} rows={3} />
+      <TextareaField
+        id="ruling-reason"
+        label="Reason for the ruling"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        error={fields.reason}
+        rows={3}
+      />
       {rule.error && Object.keys(rule.error instanceof ApiError ? rule.error.fields : {}).length === 0 && <Notice tone="error">{rule.error.message}</Notice>}
-      <Button type="submit" disabled={rule.isPending}>Record the ruling</Button>
+      <Button type="submit" disabled={rule.isPending}>
+        Record the ruling
+      </Button>
     </form>
   );
 }

@@ -24,7 +24,9 @@ export default async function NewRunPage({ params }: { params: Promise<{ id: str
         </p>
         <p className="mt-1 text-sm text-ink-600">
           {sample.acclimationStartedAt ? (
-            <>Acclimation started <LocalTime iso={sample.acclimationStartedAt.toISOString()} />; </>
+            <>
+              Acclimation started <LocalTime iso={sample.acclimationStartedAt.toISOString()} />;{" "}
+            </>
           ) : (
             <>The acclimation start of this sample is not recorded; </>
           )}

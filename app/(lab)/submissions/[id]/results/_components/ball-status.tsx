@@ -22,5 +22,9 @@ const DECISION_STYLE: Record<Decision, string> = {
 };
 
 export function DecisionBadge({ decision }: { decision: Decision }) {
-  return <span className={`inline-block rounded-md border-2 px-3 py-1 text-lg font-bold ${DECISION_STYLE[decision]}`}>{decision[0].toUpperCase() + decision.slice(1)}</span>;
+  return (
+    <span className={`inline-block rounded-md border-2 px-3 py-1 text-lg font-bold ${DECISION_STYLE[decision]}`}>
+      {decision[0].toUpperCase() + decision.slice(1)}
+    </span>
+  );
 }

@@ -15,7 +15,9 @@ export function changeLines(c: ResultChanges | null): string[] {
     ...(c.decision ? [`Decision: ${c.decision.before} → ${c.decision.after}`] : []),
     ...(c.ballsAdded.length ? [`Balls added: ${c.ballsAdded.join(", ")}`] : []),
     ...(c.ballsRemoved.length ? [`Balls removed: ${c.ballsRemoved.join(", ")}`] : []),
-    ...c.balls.map((b) => `Ball ${b.serial}: ${[b.mean && meanChange(b.mean), b.status && `status ${b.status.before} → ${b.status.after}`].filter(Boolean).join(", ")}`),
+    ...c.balls.map(
+      (b) => `Ball ${b.serial}: ${[b.mean && meanChange(b.mean), b.status && `status ${b.status.before} → ${b.status.after}`].filter(Boolean).join(", ")}`,
+    ),
   ];
   return lines.length ? lines : ["No change in the ball results or the decision."];
 }

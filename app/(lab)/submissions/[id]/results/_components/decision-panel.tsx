@@ -10,12 +10,18 @@ export function DecisionPanel({ decision: d, edition, released = false }: Pick<R
   return (
     <section aria-labelledby="decision-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
       <div className="flex flex-wrap items-baseline gap-3">
-        <h2 id="decision-heading" className="text-xl font-semibold">Decision after round {d.round}</h2>
+        <h2 id="decision-heading" className="text-xl font-semibold">
+          Decision after round {d.round}
+        </h2>
         <DecisionBadge decision={d.decision} />
       </div>
-      <p className="max-w-4xl text-ink-900" data-testid="decision-explanation">{d.explanation}</p>
+      <p className="max-w-4xl text-ink-900" data-testid="decision-explanation">
+        {d.explanation}
+      </p>
       {/* Once signed off nothing is left to do unless a lead re-opens the results. */}
-      <p className="text-sm"><strong>Next:</strong> {released ? "Nothing: the results are signed off and released. A lead can re-open them, with a reason." : d.nextAction}</p>
+      <p className="text-sm">
+        <strong>Next:</strong> {released ? "Nothing: the results are signed off and released. A lead can re-open them, with a reason." : d.nextAction}
+      </p>
       {d.belowBalls.length > 0 && (
         <Notice tone="error">
           <strong>Below the {edition.minAbsorptionS} s minimum:</strong> {d.belowNote}
@@ -39,7 +45,8 @@ export function DecisionPanel({ decision: d, edition, released = false }: Pick<R
             ]}
           />
           <p className="text-xs text-ink-600">
-            Limit = mean − k·s, with k exact from the noncentral t distribution; the fraction below is Φ((minimum − mean)/s) and assumes normally distributed ball values.
+            Limit = mean − k·s, with k exact from the noncentral t distribution; the fraction below is Φ((minimum − mean)/s) and assumes normally distributed
+            ball values.
           </p>
         </div>
       )}

@@ -19,7 +19,9 @@ interface Point {
 /** Every settled drop time of every ball, with the minimum and the guard band above it. */
 export function DropDotPlot({ balls, edition }: Pick<ResultsView, "balls" | "edition">) {
   const points: Point[] = balls.flatMap((b, i) =>
-    b.drops.filter((d) => d.settled && d.timeS !== null).map((d) => ({ x: i + 1, y: d.timeS as number, serial: b.serial, ordinal: d.ordinal, outlier: d.outlier })),
+    b.drops
+      .filter((d) => d.settled && d.timeS !== null)
+      .map((d) => ({ x: i + 1, y: d.timeS as number, serial: b.serial, ordinal: d.ordinal, outlier: d.outlier })),
   );
   const L = edition.minAbsorptionS;
   const top = L + edition.guardBandS;
@@ -30,11 +32,30 @@ export function DropDotPlot({ balls, edition }: Pick<ResultsView, "balls" | "edi
       title="Drop times per ball"
       description={`Each dot is one settled drop; the dash-dot line is the ${L} s minimum and the shaded band above it the ${edition.guardBandS} s guard band. Crosses are drops Dixon's Q flags.`}
       table={{ columns: ["Ball", "Drop", "Time (s)", "Flag"], rows: points.map((p) => [p.serial, p.ordinal, p.y.toFixed(3), p.outlier ? "outlier?" : ""]) }}
-      legend={<ReferenceLegend items={[{ kind: "minimum", label: `Minimum ${L} s` }, { kind: "guard", label: `Top of the guard band ${top} s` }]} />}
+      legend={
+        <ReferenceLegend
+          items={[
+            { kind: "minimum", label: `Minimum ${L} s` },
+            { kind: "guard", label: `Top of the guard band ${top} s` },
+          ]}
+        />
+      }
     >
       <ScatterChart {...CHART_ROOT} margin={{ ...CHART_MARGIN, bottom: 56 }}>
         <CartesianGrid {...GRID} />
-        <XAxis type="number" dataKey="x" domain={[0.5, balls.length + 0.5]} ticks={balls.map((_, i) => i + 1)} tickFormatter={serial} interval={0} angle={-40} textAnchor="end" height={64} {...AXIS} label={{ ...xAxisLabel("Ball", "serial"), offset: -48 }} />
+        <XAxis
+          type="number"
+          dataKey="x"
+          domain={[0.5, balls.length + 0.5]}
+          ticks={balls.map((_, i) => i + 1)}
+          tickFormatter={serial}
+          interval={0}
+          angle={-40}
+          textAnchor="end"
+          height={64}
+          {...AXIS}
+          label={{ ...xAxisLabel("Ball", "serial"), offset: -48 }}
+        />
         <YAxis type="number" dataKey="y" domain={y.domain} ticks={y.ticks} tickFormatter={y.format} {...AXIS} label={yAxisLabel("Drop time", "s")} width={72} />
         <ReferenceArea y1={L} y2={top} fill={PALETTE.wick300} fillOpacity={0.18} ifOverflow="extendDomain" />
         <ReferenceLine y={L} {...REFERENCE.minimum} label={referenceLabel(`min ${L} s`, REFERENCE.minimum.stroke)} />

@@ -15,14 +15,19 @@ export function EditionValues({ edition: e }: Pick<ResultsView, "edition">) {
   return (
     <section aria-labelledby="edition-heading" className="space-y-2">
       <h2 id="edition-heading" className="text-xl font-semibold">
-        Judged against <Link href={`/editions/${e.id}`} className="text-wick-700 underline">{e.name}</Link>
+        Judged against{" "}
+        <Link href={`/editions/${e.id}`} className="text-wick-700 underline">
+          {e.name}
+        </Link>
       </h2>
       <table className="w-full max-w-4xl text-left text-sm">
         <caption className="sr-only">The values of the specification edition</caption>
         <tbody>
           {rows.map(([label, value, key]) => (
             <tr key={label} className="border-t border-ink-100">
-              <th scope="row" className="w-64 py-1.5 pr-4 font-semibold">{label}</th>
+              <th scope="row" className="w-64 py-1.5 pr-4 font-semibold">
+                {label}
+              </th>
               <td className="py-1.5 pr-4 tabular-nums">{value}</td>
               <td className="py-1.5 text-ink-600">{e.sources[key] ?? "no source given"}</td>
             </tr>

@@ -26,12 +26,22 @@ export function ReopenForm({ submissionId, revision }: { submissionId: string; r
     <form onSubmit={submit} noValidate aria-label="Re-open" className="space-y-3">
       <h3 className="text-lg font-semibold">Re-open</h3>
       <p className="max-w-3xl text-sm">
-        Re-opening unlocks the submission as revision {revision + 1}. The signature of revision {revision} stays on record; the next signature
-        records what changed since it.
+        Re-opening unlocks the submission as revision {revision + 1}. The signature of revision {revision} stays on record; the next signature records what
+        changed since it.
       </p>
-      <TextareaField id="reopen-reason" label="Reason for re-opening" value={reason} onChange={(e) => setReason(e.target.value)} error={reasonError} rows={3} maxLength={2000} />
+      <TextareaField
+        id="reopen-reason"
+        label="Reason for re-opening"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        error={reasonError}
+        rows={3}
+        maxLength={2000}
+      />
       {err && !err.fields.reason && <Notice tone="error">{err.message}</Notice>}
-      <Button type="submit" kind="secondary" disabled={reopen.isPending}>{reopen.isPending ? "Re-opening…" : `Re-open as revision ${revision + 1}`}</Button>
+      <Button type="submit" kind="secondary" disabled={reopen.isPending}>
+        {reopen.isPending ? "Re-opening…" : `Re-open as revision ${revision + 1}`}
+      </Button>
     </form>
   );
 }

@@ -16,7 +16,12 @@ import { SurveillancePanel } from "./surveillance-panel";
 /** `signOff` (for leads) sits under the decision it signs. */
 export function ResultsPanel({ id, signOff }: { id: string; signOff?: ReactNode }) {
   const q = useSubmissionResults(id);
-  if (q.isPending) return <p className="text-ink-600" role="status">Computing the results…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Computing the results…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
   const r = q.data;
   const settled = r.balls.some((b) => b.drops.some((d) => d.settled));
@@ -30,7 +35,9 @@ export function ResultsPanel({ id, signOff }: { id: string; signOff?: ReactNode 
         <p className="text-ink-600">{r.submission.organisationName}</p>
       </header>
       <Downloads id={r.submission.id} />
-      <Notice tone="warn"><Caution /></Notice>
+      <Notice tone="warn">
+        <Caution />
+      </Notice>
       <DecisionPanel decision={r.decision} edition={r.edition} released={r.submission.status === "released"} />
       {signOff}
       {r.surveillance && <SurveillancePanel comparison={r.surveillance} />}

@@ -25,16 +25,26 @@ export function SignForm({ submissionId, revision }: { submissionId: string; rev
     <form onSubmit={submit} noValidate aria-label="Sign off results" className="space-y-3">
       <h3 className="text-lg font-semibold">Sign off results (revision {revision})</h3>
       <p className="max-w-3xl text-sm">
-        Your signature means <strong>&ldquo;results reviewed and released&rdquo;</strong>: you have reviewed these results and release them
-        to the manufacturer, who is told by e-mail. It locks this submission&apos;s readings, rulings, runs and samples until a lead re-opens it
-        with a reason. It records your name and the time.
+        Your signature means <strong>&ldquo;results reviewed and released&rdquo;</strong>: you have reviewed these results and release them to the manufacturer,
+        who is told by e-mail. It locks this submission&apos;s readings, rulings, runs and samples until a lead re-opens it with a reason. It records your name
+        and the time.
       </p>
       {notYet && <Notice tone="warn">Not ready to sign: {notYet}</Notice>}
       <div className="max-w-sm">
-        <Field id="signoff-password" type="password" autoComplete="current-password" label="Your password, to sign" value={password} onChange={(e) => setPassword(e.target.value)} error={err?.fields.password ? err.message : undefined} />
+        <Field
+          id="signoff-password"
+          type="password"
+          autoComplete="current-password"
+          label="Your password, to sign"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={err?.fields.password ? err.message : undefined}
+        />
       </div>
       {err && !err.fields.password && <Notice tone="error">{err.message}</Notice>}
-      <Button type="submit" disabled={sign.isPending}>{sign.isPending ? "Signing…" : "Sign off results"}</Button>
+      <Button type="submit" disabled={sign.isPending}>
+        {sign.isPending ? "Signing…" : "Sign off results"}
+      </Button>
     </form>
   );
 }

@@ -4,7 +4,9 @@ import type { SignatureView, SignOffView } from "@/app/_client/signoff";
 import { LocalTime } from "@/components/ui/local-time";
 import { changeLines } from "./change-lines";
 
-type Entry = { kind: "signed"; revision: number; at: string; s: SignatureView } | { kind: "reopened"; revision: number; at: string; r: SignOffView["reopenings"][number] };
+type Entry =
+  | { kind: "signed"; revision: number; at: string; s: SignatureView }
+  | { kind: "reopened"; revision: number; at: string; r: SignOffView["reopenings"][number] };
 
 /** Every signature and re-opening, oldest first, as a record a reviewer of the lab can follow. */
 export function SignoffHistory({ view }: { view: SignOffView }) {
@@ -25,7 +27,11 @@ export function SignoffHistory({ view }: { view: SignOffView }) {
             {e.s.changes ? (
               <div className="mt-1">
                 <p className="font-semibold">Changed since revision {e.revision - 1}:</p>
-                <ul className="list-disc pl-5">{changeLines(e.s.changes).map((l) => <li key={l}>{l}</li>)}</ul>
+                <ul className="list-disc pl-5">
+                  {changeLines(e.s.changes).map((l) => (
+                    <li key={l}>{l}</li>
+                  ))}
+                </ul>
               </div>
             ) : (
               <p className="text-ink-600">First signature: no earlier revision to compare with.</p>

@@ -10,9 +10,15 @@ import { PortalSampleRequests } from "./portal-sample-requests";
 
 export function PortalSubmission({ id }: { id: string }) {
   const q = useSubmission(id);
-  if (q.isPending) return <p className="text-ink-600" role="status">Loading the submission…</p>;
+  if (q.isPending)
+    return (
+      <p className="text-ink-600" role="status">
+        Loading the submission…
+      </p>
+    );
   if (q.isError) return <Notice tone="error">{q.error.message}</Notice>;
-  if (q.data.view !== "manufacturer") return <Notice tone="error">This page is for manufacturers; laboratory staff open submissions from the lab pages.</Notice>;
+  if (q.data.view !== "manufacturer")
+    return <Notice tone="error">This page is for manufacturers; laboratory staff open submissions from the lab pages.</Notice>;
   const s = q.data;
   const items = [
     { label: "Kind", value: KIND_LABELS[s.kind] },
@@ -33,7 +39,9 @@ export function PortalSubmission({ id }: { id: string }) {
       </header>
       <PortalResults id={s.id} />
       <section aria-labelledby="rounds-heading" className="space-y-2">
-        <h2 id="rounds-heading" className="text-xl font-semibold">Samples received</h2>
+        <h2 id="rounds-heading" className="text-xl font-semibold">
+          Samples received
+        </h2>
         {s.samplesByRound.length === 0 ? (
           <p className="text-ink-600">The laboratory has not logged any sample balls of this submission yet.</p>
         ) : (
@@ -42,14 +50,20 @@ export function PortalSubmission({ id }: { id: string }) {
               <caption className="sr-only">Sample balls received, by round</caption>
               <thead className="bg-ink-50 text-ink-600">
                 <tr>
-                  <th scope="col" className="px-3 py-2">Round</th>
-                  <th scope="col" className="px-3 py-2">Sample balls</th>
+                  <th scope="col" className="px-3 py-2">
+                    Round
+                  </th>
+                  <th scope="col" className="px-3 py-2">
+                    Sample balls
+                  </th>
                 </tr>
               </thead>
               <tbody>
                 {s.samplesByRound.map((r) => (
                   <tr key={r.round} className="border-t border-ink-100">
-                    <th scope="row" className="px-3 py-2 font-semibold">Round {r.round}</th>
+                    <th scope="row" className="px-3 py-2 font-semibold">
+                      Round {r.round}
+                    </th>
                     <td className="px-3 py-2">{r.count}</td>
                   </tr>
                 ))}
