@@ -32,7 +32,7 @@ export const envSchema = z.object({
   CLIP_PART_SIZE_MB: z.coerce.number().int().min(5).max(512).default(16),
   // ffprobe's format names (a file is judged by probing it, never by its extension).
   CLIP_CONTAINERS: z.string().default("mov,mp4,m4a,3gp,3g2,mj2,matroska,webm,avi,mpegts,mpeg"),
-  CLIP_JOB_EXPIRE_SECONDS: z.coerce
+  JOB_EXPIRE_SECONDS: z.coerce
     .number()
     .int()
     .min(5)

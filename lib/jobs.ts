@@ -35,7 +35,7 @@ export function boss(): Promise<PgBoss> {
         retryLimit: q.retryLimit,
         retryDelay: q.retryDelay,
         retryBackoff: q.retryBackoff,
-        expireInSeconds: env().CLIP_JOB_EXPIRE_SECONDS,
+        expireInSeconds: env().JOB_EXPIRE_SECONDS,
       });
     }
     return b;

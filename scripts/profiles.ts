@@ -52,7 +52,7 @@ export const PROFILES: Record<Profile["name"], Profile> = {
     // Small parts so a test file spans several; quick expiry so a killed worker's job returns soon.
     env: {
       CLIP_PART_SIZE_MB: "5",
-      CLIP_JOB_EXPIRE_SECONDS: "20",
+      JOB_EXPIRE_SECONDS: "20",
       JOB_MAINTENANCE_SECONDS: "2",
       OUTBOX_SWEEP_SECONDS: "2",
       OUTBOX_LEASE_SECONDS: "10",

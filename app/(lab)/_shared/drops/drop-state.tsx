@@ -30,7 +30,7 @@ export function dropStateOf(d: Pick<DropView, "blind" | "state" | "clip" | "myDr
   return { words: "waiting for your reading", tone: "waiting" };
 }
 
-export function DropState({ drop }: { drop: Parameters<typeof dropStateOf>[0] }) {
+export function DropStateBadge({ drop }: { drop: Parameters<typeof dropStateOf>[0] }) {
   const { words, tone } = dropStateOf(drop);
   return <span className={`whitespace-nowrap rounded-full px-2 py-0.5 text-xs font-semibold ${STYLE[tone]}`}>{words}</span>;
 }

@@ -7,11 +7,12 @@ import { Notice } from "@/components/ui/notice";
 import { ApiError } from "@/lib/http/client";
 import type { Role } from "@/lib/users/rules";
 import { RoleCheckboxes } from "./role-checkboxes";
-import { useInvite, useOrganisations } from "./users-api";
+import { useOrganisationList } from "@/app/_client/organisations";
+import { useInvite } from "./users-api";
 
 export function InviteForm() {
   const invite = useInvite();
-  const organisations = useOrganisations();
+  const organisations = useOrganisationList();
   const [roles, setRoles] = useState<Role[]>(["technician"]);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const manufacturer = roles.includes("manufacturer");

@@ -12,13 +12,6 @@ export function useUsers() {
   return useQuery({ queryKey: USERS, queryFn: () => fetchJson<{ users: UserView[] }>("/api/users").then((r) => r.users) });
 }
 
-export function useOrganisations() {
-  return useQuery({
-    queryKey: ["organisations"],
-    queryFn: () => fetchJson<{ organisations: OrganisationRow[] }>("/api/organisations").then((r) => r.organisations),
-  });
-}
-
 export function useInvite() {
   const qc = useQueryClient();
   return useMutation({

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { DropView } from "@/app/_client/drops";
-import { DropState } from "@/app/(lab)/_shared/drops/drop-state";
+import { DropStateBadge } from "@/app/(lab)/_shared/drops/drop-state";
 
 /** Which drop this is, where it sits, and what the viewer may know of its state. */
 export function DropHeader({ drop }: { drop: DropView }) {
@@ -22,7 +22,7 @@ export function DropHeader({ drop }: { drop: DropView }) {
       </p>
       <h1 className="text-3xl font-bold">Drop {drop.ordinal}</h1>
       <p className="mt-2 flex flex-wrap items-center gap-3 text-sm text-ink-700">
-        <DropState drop={drop} />
+        <DropStateBadge drop={drop} />
         {drop.blind && <span className="font-semibold text-ink-800">Blind reading: other readings stay hidden until both are in.</span>}
         {drop.clip && (
           <span>

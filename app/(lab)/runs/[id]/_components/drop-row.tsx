@@ -4,7 +4,7 @@ import Link from "next/link";
 import type { ClipView } from "@/app/_client/clips";
 import type { DropView } from "@/app/_client/drops";
 import { groupDigits } from "@/app/_client/clip-words";
-import { DropState } from "@/app/(lab)/_shared/drops/drop-state";
+import { DropStateBadge } from "@/app/(lab)/_shared/drops/drop-state";
 import { PlaceDropForm } from "./place-drop-form";
 
 export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView; readyClips: ClipView[]; canEdit: boolean; canRead: boolean }) {
@@ -28,7 +28,7 @@ export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView
       </td>
       <td className="whitespace-nowrap px-3 py-3">{drop.startFrame === null ? "—" : groupDigits(drop.startFrame)}</td>
       <td className="px-3 py-3">
-        <DropState drop={drop} />
+        <DropStateBadge drop={drop} />
       </td>
       {canEdit && (
         <td className="px-3 py-2">
