@@ -1,26 +1,23 @@
 "use client";
 
-import { useState, type FormEvent } from "react";
+import type { FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { apiError } from "@/app/_client/form-errors";
 import { useAcceptRun } from "@/app/_client/runs";
-
-const MIN_REASON = 10;
+import { useReason } from "./use-reason";
 
 /** A lead's acceptance of flagged conditions: the reason is kept with the run for the audit. */
 export function AcceptForm({ runId }: { runId: string }) {
   const accept = useAcceptRun(runId);
-  const [reason, setReason] = useState("");
-  const [own, setOwn] = useState<string | null>(null);
+  const { reason, setReason, own, checked } = useReason();
   const err = apiError(accept.error);
 
   function onSubmit(e: FormEvent) {
     e.preventDefault();
-    const text = reason.trim();
-    if (text.length < MIN_REASON) return setOwn(`Write the reason in a sentence (at least ${MIN_REASON} characters).`);
-    setOwn(null);
+    const text = checked();
+    if (text === null) return;
     accept.mutate(text);
   }
 

@@ -1,26 +1,23 @@
 "use client";
 
-import { useState, type FormEvent } from "react";
+import type { FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { apiError } from "@/app/_client/form-errors";
 import { useVoidRun } from "@/app/_client/runs";
-
-const MIN_REASON = 10;
+import { useReason } from "./use-reason";
 
 /** A lead voids a run that must not count. Final: the run stays on record, shown as voided. */
 export function VoidForm({ runId }: { runId: string }) {
   const voiding = useVoidRun(runId);
-  const [reason, setReason] = useState("");
-  const [own, setOwn] = useState<string | null>(null);
+  const { reason, setReason, own, checked } = useReason();
   const err = apiError(voiding.error);
 
   function onSubmit(e: FormEvent) {
     e.preventDefault();
-    const text = reason.trim();
-    if (text.length < MIN_REASON) return setOwn(`Write the reason in a sentence (at least ${MIN_REASON} characters).`);
-    setOwn(null);
+    const text = checked();
+    if (text === null) return;
     if (!window.confirm("Void this run? It will no longer count, and a void cannot be undone. Record a new run if the ball is to be tested again.")) return;
     voiding.mutate(text);
   }
