@@ -5,8 +5,8 @@ import { defineConfig } from "vitest/config";
 const alias = { "@": path.resolve(import.meta.dirname) };
 // Tests that kill the shared worker: the worker is one process for the whole run, so while it is
 // down (and until the jobs it held expire) every other file's jobs and mails would wait on it. They
-// run in a project of their own, after every other project has finished (a higher groupOrder), one
-// file at a time. A second worker of their own would not do: both would consume the same queues, so
+// run in a project of their own (groupOrder 1), one file at a time, once the unit and integration
+// files (group 0) have finished; vitest runs the e2e files, one at a time, in a group after both. A second worker of their own would not do: both would consume the same queues, so
 // nothing decides which of them takes the job the test means to interrupt.
 const WORKER_KILLERS = ["tests/integration/worker-restart.test.ts"];
 
