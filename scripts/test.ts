@@ -6,10 +6,11 @@ import { migrateAndSeed } from "./database";
 import { PROFILES } from "./profiles";
 import { projectRoot, type Service } from "./services/service";
 import { startStack } from "./stack";
-import { countResults } from "./test-totals";
+import { countResults, totalsLine } from "./test-totals";
 
 // `npm test`: fresh services on their own ports, the built app and the worker, then every test
-// project in one vitest run. Ends with one line `tests: N passed, N failed`.
+// project in one vitest run. Ends with one line `tests: N passed, N failed, N skipped, N todo`; a run
+// that did not succeed (vitest's exit code, nothing passed) never says "0 failed" (test-totals.ts).
 const profile = PROFILES.test;
 const log = (s: string) => console.log(`[test] ${s}`);
 const VITEST = path.join(projectRoot, "node_modules", "vitest", "vitest.mjs");
@@ -39,13 +40,13 @@ async function main(): Promise<number> {
       const child = spawn(process.execPath, args, { cwd: projectRoot, env: { ...process.env, ...stack.env, TEST_TMP_DIR: tmp }, stdio: "inherit" });
       child.on("exit", (c) => resolve(c ?? 1));
     });
-    const totals = countResults(report);
+    const totals = countResults(report, code);
     log(`finished in ${((Date.now() - t0) / 1000).toFixed(1)} s; logs in ${path.relative(projectRoot, logs)}, screenshots in test-results/`);
-    console.log(`tests: ${totals.passed} passed, ${totals.failed} failed`);
-    return code === 0 && totals.failed === 0 && totals.passed > 0 ? 0 : 1;
+    console.log(totalsLine(totals));
+    return code === 0 && totals.failed === 0 ? 0 : 1;
   } catch (err) {
     console.error(`[test] ${err instanceof Error ? err.message : err}`);
-    console.log(`tests: 0 passed, 1 failed`);
+    console.log(totalsLine({ passed: 0, failed: 1, skipped: 0, todo: 0 }));
     return 1;
   } finally {
     for (const s of running.reverse()) await s.stop().catch(() => {});

@@ -49,7 +49,12 @@ export interface SubmissionDecision {
 export function toleranceJudgement(values: number[], limits: ResultLimits): ToleranceJudgement | null {
   if (values.length < 2) return null;
   const { toleranceCoverage: coverage, toleranceConfidence: confidence, minAbsorptionS: L } = limits;
-  const t = lowerToleranceLimit(values, coverage, confidence);
+  // Identical values have no spread: their mean, SD and limit are the common value, 0 and that value
+  // exactly. Computed, the mean can land an ulp or two off (with an SD of 1e-16), which would put a
+  // ball at the minimum below it, or a ball below the minimum "0 %" below.
+  const same = values.every((v) => v === values[0]);
+  const computed = lowerToleranceLimit(values, coverage, confidence);
+  const t = same ? { ...computed, mean: values[0], sd: 0, limit: values[0] } : computed;
   const spread = t.sd > 0 ? fractionBelow(values, L) : null;
   const fraction = spread ? spread.fraction : t.mean < L ? 1 : t.mean > L ? 0 : 0.5;
   return { n: values.length, ...t, coverage, confidence, fractionBelow: fraction, cpl: spread?.cpl ?? null, passes: t.limit >= L };

@@ -59,6 +59,27 @@ async function clipNamed(name: string): Promise<ClipView> {
   return clip;
 }
 
+/**
+ * The ids of the uploads the page keeps in the browser to resume (IndexedDB "wickmark-uploads",
+ * store "pending"). Called only once the page has opened that database itself.
+ */
+const storedUploads = (page: Page) =>
+  page.evaluate(
+    () =>
+      new Promise<string[]>((resolve, reject) => {
+        const req = indexedDB.open("wickmark-uploads");
+        req.onerror = () => reject(req.error);
+        req.onsuccess = () => {
+          const idb = req.result;
+          const keys = idb.transaction("pending", "readonly").objectStore("pending").getAllKeys();
+          keys.onsuccess = () => {
+            idb.close();
+            resolve(keys.result.map(String));
+          };
+          keys.onerror = () => reject(keys.error);
+        };
+      }),
+  );
 const sha256 = (file: string) => createHash("sha256").update(readFileSync(file)).digest("hex");
 const valueNow = async (bar: Locator) => Number(await bar.getAttribute("aria-valuenow"));
 
@@ -131,6 +152,8 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     const { id } = await clipNamed(name);
     const kept = await (await lead.get(`/api/clips/${id}/upload`)).json();
     expect(kept.parts.map((p: { partNumber: number }) => p.partNumber)).toEqual([1]);
+    // The unfinished upload is kept in the browser, which is what a reload resumes from.
+    expect(await storedUploads(page)).toContain(id);
 
     await page.unrouteAll({ behavior: "ignoreErrors" });
     await page.reload();
@@ -146,9 +169,10 @@ describe("recordings in the browser: upload, pause and resume across a reload, t
     expect(clip.storedSize).toBe(size);
     expect(clip.sha256).toBe(sha256(file));
     expect(clip.status).toBe("ready");
-    // Finished uploads are forgotten by the browser: a reload offers nothing to resume.
+    // Finished uploads are forgotten by the browser: its store no longer holds this one, and a reload offers nothing to resume.
     await page.reload();
     await recordings.getByRole("link", { name }).waitFor();
+    expect(await storedUploads(page)).not.toContain(id);
     expect(await recordings.getByRole("button", { name: `Resume upload of ${name}` }).count()).toBe(0);
   });
 

@@ -49,7 +49,9 @@ describe("multipart upload straight to storage", () => {
     const state = await (await tech.get(`/api/clips/${clipId}/upload`)).json();
     await sendParts(tech, clipId, file, state, [1]);
     expect(await complete(tech, clipId)).toEqual({ clipId, status: "processing" });
-    expect((await complete(tech, clipId)).status).not.toBe("uploading");
+    // The second completion changes nothing: the clip is still being processed, or already ready.
+    const again = await complete(tech, clipId);
+    expect(again).toEqual({ clipId, status: expect.stringMatching(/^(processing|ready)$/) });
     const clip = await waitForClip(tech, clipId);
     expect(clip.status).toBe("ready");
     expect(clip.sha256).toBe(sha(file));

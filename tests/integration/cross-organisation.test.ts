@@ -27,7 +27,19 @@ beforeAll(async () => {
   };
   own = await make(orgA);
   other = await make(orgB);
+  otherBefore = await otherRecords();
 });
+// Every row of the other organisation's submission, its samples and their runs, as stored.
+let otherBefore: Awaited<ReturnType<typeof otherRecords>>;
+async function otherRecords() {
+  return {
+    submission: await db()("submissions").where({ id: other.submission }).first(),
+    samples: await db()("samples").where({ submission_id: other.submission }).orderBy("id"),
+    runs: await db()("runs")
+      .whereIn("sample_id", db()("samples").select("id").where({ submission_id: other.submission }))
+      .orderBy("id"),
+  };
+}
 afterAll(() => closeDb());
 
 describe("a manufacturer and another organisation's records", () => {
@@ -80,6 +92,14 @@ describe("a manufacturer and another organisation's records", () => {
     expect((await makerA.patch(`/api/submissions/${own.submission}`, { notes: "changed by maker" })).status).toBe(403);
     const row = await db()("submissions").where({ id: own.submission }).first("notes");
     expect(row.notes).toBe("");
-    expect(await db()("samples").where({ id: other.sample }).first("id")).toBeTruthy();
+    expect(await db()("samples").where({ id: other.sample }).first("id")).toEqual({ id: other.sample });
+  });
+
+  it("left every record of the other organisation as it was after the refused writes", async () => {
+    expect(otherBefore.samples.map((x: { id: string }) => x.id)).toEqual([other.sample]);
+    expect(otherBefore.runs.map((x: { id: string }) => x.id)).toEqual([other.run]);
+    expect(await otherRecords()).toEqual(otherBefore);
+    const me = (await (await makerA.get("/api/me")).json()).id;
+    expect(await db()("audit_events").where({ actor_id: me }).whereNot("action", "like", "sign_in.%").select("action")).toEqual([]);
   });
 });

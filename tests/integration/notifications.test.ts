@@ -10,16 +10,20 @@ import { signedIn, type Client } from "../helpers/app";
 import { demo, demoOrganisationId, makeUser } from "../helpers/fixtures";
 import { newRun, newSample, newSubmission } from "../helpers/intake";
 import { mailsTo, waitForMail, type FakeMail } from "../helpers/mailbox";
+import { enqueueAndWait, outboxTo, waitForOutboxStatus } from "../helpers/outbox";
 import { json, mark, placeOnRun, read } from "../helpers/readings";
 
 // Each person's switches for the optional notices, and the reviewers' daily digest. The digest runs
 // in the real worker (the test stack sets REVIEWER_DIGEST_EVERY_SECONDS); the runs for a fixed day
-// are called directly, so their counts are those of this test's own submission.
+// are called directly, so their counts are those of this test's own submission. Nothing sleeps: a mail
+// that must not come is checked on the outbox rows once the worker has run a digest job we queued.
 afterAll(async () => {
   await stopBoss();
   await closeDb();
 });
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+/** Queues a digest run and waits until the worker has done it: every reviewer's digest of today is written by then. */
+const workerDigestRun = async () => expect(await enqueueAndWait("reviewerDigest", {}, 60_000)).toBe("completed");
 const today = () => new Date().toISOString().slice(0, 10);
 const digestsOf = (mails: FakeMail[], day: string) => mails.filter((m) => m.subject.startsWith(`${day}:`));
 type Setting = { kind: string; essential: boolean; on: boolean };
@@ -70,9 +74,14 @@ describe("notification settings", () => {
     });
     const ids = await db().transaction((trx) => queueMail(trx, [{ userId: u.id, email: u.email, optOut: ["discrepancy.new", "reviewer.digest"] }], essential));
     expect(ids).toHaveLength(1);
+    // The worker's own digest has had its chance (a run we queued is done), and other files'
+    // discrepancies are written for leads meanwhile: still the one essential row for this account.
+    await workerDigestRun();
+    const rows = await outboxTo(u.email);
+    expect(rows.map((r) => r.id)).toEqual(ids);
+    expect(await waitForOutboxStatus(ids[0], "sent")).toMatchObject({ status: "sent", attempts: 1 });
     const [m] = await waitForMail(u.email, 1, 30_000);
     expect(m.subject).toBe("D-OPT: please send 3 more samples for round 2");
-    await sleep(8000);
     expect((await mailsTo(u.email)).map((x) => x.subject)).toEqual([m.subject]);
   }, 60_000);
 });
@@ -112,13 +121,13 @@ describe("the reviewers' daily digest", () => {
     const at = new Date(`${day}T07:00:00Z`);
     expect(await runReviewerDigest({ now: at, reviewerIds: [r.id, skipped.id] })).toBe(1);
     expect(await runReviewerDigest({ now: at, reviewerIds: [r.id, skipped.id] })).toBe(0);
-    const mine = digestsOf(
-      await waitForMail(r.email, 1, 30_000).then(async () => {
-        for (let i = 0; i < 100 && digestsOf(await mailsTo(r.email), day).length === 0; i++) await sleep(300);
-        return mailsTo(r.email);
-      }),
-      day,
-    );
+    const rows = await outboxTo(r.email, `${day}:`);
+    expect(rows).toHaveLength(1);
+    expect(await outboxTo(skipped.email, `${day}:`)).toEqual([]);
+    expect(await waitForOutboxStatus(rows[0].id, "sent")).toMatchObject({ status: "sent", attempts: 1 });
+    const end = Date.now() + 30_000;
+    while (digestsOf(await mailsTo(r.email), day).length === 0 && Date.now() < end) await sleep(100);
+    const mine = digestsOf(await mailsTo(r.email), day);
     expect(mine).toHaveLength(1);
     expect(mine[0].subject).toMatch(new RegExp(`^${day}: \\d+ drops? waiting for you to read$`));
     expect(mine[0].text).toContain("Hello Digest Reader,");
@@ -136,8 +145,14 @@ describe("the reviewers' daily digest", () => {
     const [first, ...more] = digestsOf(await mailsTo(w.email), today());
     expect(first?.text).toContain(`${reference}: ${n - 1} drop${n - 1 === 1 ? "" : "s"}`);
     expect(more).toHaveLength(0);
-    await sleep(10_000);
+    // Two more runs by the worker, done before we look: the day's digest is not written again.
+    await workerDigestRun();
+    await workerDigestRun();
+    const rows = await outboxTo(w.email, `${today()}:`);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ status: "sent", attempts: 1 });
     expect(digestsOf(await mailsTo(w.email), today())).toHaveLength(1);
+    expect(await outboxTo(skipped.email, `${today()}:`)).toEqual([]);
     expect(digestsOf(await mailsTo(skipped.email), today())).toHaveLength(0);
   }, 90_000);
 });

@@ -79,7 +79,7 @@ describe("a lead rules on a discrepancy", () => {
   });
 
   it("is refused, in words, without a reason, to a non-lead, twice, on a drop not in discrepancy, and to a lead who read it", async () => {
-    expect(await message(await rule(otherLead, dropIds[2], { chosen: "first", reason: "" }), 422)).toBeTruthy();
+    expect(await message(await rule(otherLead, dropIds[2], { chosen: "first", reason: "" }), 422)).toBe("Please correct the form. Reason is required.");
     const short = await rule(otherLead, dropIds[2], { chosen: "first", reason: "too short" });
     expect(JSON.stringify(await short.json())).toMatch(/at least 10 characters/);
     expect(await message(await rule(tech, dropIds[2], { chosen: "first", reason: "A technician's attempt at a ruling." }), 403)).toMatch(/lead/);
@@ -88,7 +88,9 @@ describe("a lead rules on a discrepancy", () => {
     expect(await message(await rule(party, dropIds[2], { chosen: "second", reason: "I read it and think I was right." }), 403)).toMatch(
       /another lead must rule/,
     );
-    expect(await message(await rule(otherLead, dropIds[2], { chosen: "third", reason: "Third reading without its marks." }), 422)).toBeTruthy();
+    expect(await message(await rule(otherLead, dropIds[2], { chosen: "third", reason: "Third reading without its marks." }), 422)).toBe(
+      "Please correct the form. Mark the dispense frame of the third reading. Mark the clear frame of the third reading.",
+    );
     expect((await db()("drops").where({ id: dropIds[2] }).first()).state).toBe("discrepancy");
     await json(await rule(otherLead, dropIds[2], { chosen: "first", reason: "The first reader's clear frame is where the film is gone." }), 201);
   });

@@ -157,8 +157,8 @@ describe("voiding a run", () => {
     const mistake = (await newRun(tech, secondBallSample)).id;
     expect((await results()).balls.find((x) => x.serial === "RC-2")?.status).toBe("pending");
     expect(await message(await sign(), 409)).toMatch(/pending|not settled/);
-    expect(await message(await voidRun(lead, mistake, "short"), 422)).toBeTruthy();
-    expect(await message(await voidRun(tech, mistake, "Recorded on the wrong ball by mistake."), 403)).toBeTruthy();
+    expect(await message(await voidRun(lead, mistake, "short"), 422)).toBe("Please correct the form. Write the reason in a sentence (at least 10 characters).");
+    expect(await message(await voidRun(tech, mistake, "Recorded on the wrong ball by mistake."), 403)).toBe("Only a lead can void a run.");
     const run = (await json<{ run: RunDetail }>(await voidRun(lead, mistake, "Recorded on the wrong ball by mistake."), 200)).run;
     expect(run).toMatchObject({
       voidReason: "Recorded on the wrong ball by mistake.",

@@ -91,7 +91,9 @@ describe("signing off a submission's results", () => {
   });
 
   it("re-opening needs a reason, starts revision 2, and the next signature records what changed", async () => {
-    expect(await message(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "short" }), 422)).toBeTruthy();
+    expect(await message(await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "short" }), 422)).toBe(
+      "Please correct the form. Write the reason for re-opening in a sentence (at least 10 characters).",
+    );
     const { signOff } = await json<{ signOff: SignOffView }>(
       await lead.post(`/api/submissions/${submissionId}/reopen`, { reason: "A third ball arrived and is to be included." }),
       201,

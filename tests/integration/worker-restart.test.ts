@@ -10,6 +10,7 @@ import { clipNeedingProxy } from "../helpers/media";
 
 // A worker killed in the middle of a job: `npm test` supervises the worker as a service manager
 // would and starts it again; the job held by the dead worker expires and runs again to the end.
+// It kills the one worker every file shares, so vitest.config.mts runs it alone, after the rest.
 let tech: Client;
 let runId: string;
 const pidFile = process.env.WORKER_PID_FILE!;

@@ -17,6 +17,15 @@ describe("conditionFlags", () => {
     expect(flag).toEqual({ code: "acclimation_short", message: "Acclimated for 14.5 h before the test; the edition asks for at least 24 h." });
   });
 
+  it("takes exactly the minimum acclimation as enough, and one second less as short", () => {
+    expect(conditionFlags(limits, { ...good, testedAt: hoursLater(24) })).toEqual([]);
+    expect(conditionFlags(limits, { ...good, testedAt: new Date(hoursLater(24).getTime() - 1000) }).map((f) => f.code)).toEqual(["acclimation_short"]);
+    // The same at a minimum that is not a whole number of hours (an example edition value).
+    const odd = { ...limits, minAcclimationH: 16.25 };
+    expect(conditionFlags(odd, { ...good, testedAt: hoursLater(16.25) })).toEqual([]);
+    expect(conditionFlags(odd, { ...good, testedAt: new Date(hoursLater(16.25).getTime() - 1000) }).map((f) => f.code)).toEqual(["acclimation_short"]);
+  });
+
   it("flags a missing acclimation start", () => {
     expect(conditionFlags(limits, { ...good, acclimationStartedAt: null }).map((f) => f.code)).toEqual(["acclimation_missing"]);
   });

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ballResult, submissionResults, type BallInput, type ResultLimits } from "@/lib/results/rules";
+import { toleranceJudgement } from "@/lib/results/decision";
 import { digitsAgainst, signed } from "@/lib/numbers";
 import { pct, secsAgainst } from "@/lib/results/words";
 import { toleranceFactor } from "@/lib/stats";
@@ -244,5 +245,57 @@ describe("the staged submission decision", () => {
       }),
       { numRuns: 50 },
     );
+  });
+});
+
+describe("the tolerance judgement of identical ball values (SD 0)", () => {
+  // Arithmetic: with no spread the fraction below is 1 when the common value is below the minimum,
+  // 0 above it, and taken as one half exactly at it; the lower limit is the common value itself.
+  const below = (x: number) => x - Math.abs(x) * Number.EPSILON; // the nearest double below x, or next to it
+  it("every ball below the minimum: 100 % below and the limit fails, whatever the float noise of the mean", () => {
+    // 38 balls of 999.999999999999 s against 999.9999999999991 s: summed, the mean lands at or above
+    // the minimum, which once read as "0 %" below.
+    const t = toleranceJudgement(Array(38).fill(999.999999999999), { ...LIMITS, minAbsorptionS: 999.9999999999991 })!;
+    expect(t).toMatchObject({ sd: 0, mean: 999.999999999999, limit: 999.999999999999, fractionBelow: 1, cpl: null, passes: false });
+    for (const n of [2, 3, 5, 10, 34]) {
+      const v = below(1.9);
+      expect(v).toBeLessThan(1.9);
+      expect(toleranceJudgement(Array(n).fill(v), { ...LIMITS, minAbsorptionS: 1.9 }), `n = ${n}`).toMatchObject({ fractionBelow: 1, passes: false, sd: 0 });
+    }
+  });
+
+  it("every ball exactly at the minimum: the limit holds and half is taken as below", () => {
+    // Three balls at 1.9 s: the computed mean is 1.8999999999999997 with an SD of 3e-16.
+    const t = toleranceJudgement([1.9, 1.9, 1.9], { ...LIMITS, minAbsorptionS: 1.9 })!;
+    expect(t).toMatchObject({ mean: 1.9, sd: 0, limit: 1.9, fractionBelow: 0.5, passes: true });
+  });
+
+  it("identical values of any size and count: the fraction and the verdict follow the value's side of the minimum (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.01, max: 1000, noNaN: true }),
+        fc.double({ min: 0.01, max: 1000, noNaN: true }),
+        fc.integer({ min: 2, max: 40 }),
+        (v, L, n) => {
+          const t = toleranceJudgement(Array(n).fill(v), { ...LIMITS, minAbsorptionS: L })!;
+          expect(t.fractionBelow).toBe(v < L ? 1 : v > L ? 0 : 0.5);
+          expect(t.passes).toBe(v >= L);
+        },
+      ),
+      {
+        numRuns: 3000,
+        examples: [
+          [999.999999999999, 999.9999999999991, 38],
+          [1.9, 1.9, 3],
+        ],
+      },
+    );
+  });
+
+  it("says 100 % below in the final decision's words when every ball has the same value below the minimum", () => {
+    const balls = Array.from({ length: 10 }, (_, i) => ball(`S${i}`, i < 2 ? 1 : 2, [131.2, 131.2, 131.2]));
+    const { decision } = submissionResults({ ...LIMITS, roundSizes: [2, 8] }, balls, 2);
+    expect(decision).toMatchObject({ decision: "below limit", decidedBy: "tolerance limit" });
+    expect(decision.explanation).toContain("estimated fraction of balls below the minimum 100 %.");
   });
 });

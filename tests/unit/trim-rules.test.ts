@@ -89,7 +89,11 @@ describe("copyEndFor", () => {
   });
 
   it("keeps everything when the end is past the packets read", () => {
-    expect(copyEndFor(packets, 9)).toBeCloseTo(7.08, 6);
+    // ffmpeg's stream copy stops at the first packet whose decode time reaches -to (the rule the
+    // function's own comment states): every packet read must decode before the value returned.
+    const to = copyEndFor(packets, 9);
+    expect(packets.filter((p) => p.dts >= to)).toEqual([]);
+    expect(Math.max(...packets.map((p) => p.dts))).toBeCloseTo(6.08, 6);
     expect(copyEndFor([], 4)).toBe(4);
   });
 

@@ -2,7 +2,6 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
-import type { OrganisationRow } from "@/lib/organisations/service";
 import type { InviteInput, UserUpdate } from "@/lib/users/schema";
 import type { UserView } from "@/lib/users/view";
 
