@@ -5,10 +5,12 @@ set -euo pipefail
 # The AWS SDK warns at every start that its Node 20 support ends; versions are pinned (DEVELOPERS.md).
 export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 cd "$(dirname "$0")/.."
-cmd="${1:?usage: bootstrap.sh start|test|dev|bench/index}"
+cmd="${1:?usage: bootstrap.sh start|test|dev|lint|bench/index}"
 shift
 
 need=()
+# Linting needs only the npm packages.
+if [ "$cmd" != lint ]; then
 ls /usr/lib/postgresql/*/bin/postgres >/dev/null 2>&1 || need+=(postgresql)
 command -v ffmpeg >/dev/null 2>&1 && command -v ffprobe >/dev/null 2>&1 || need+=(ffmpeg)
 command -v setpriv >/dev/null 2>&1 || need+=(util-linux)
@@ -20,6 +22,7 @@ if [ ${#need[@]} -gt 0 ]; then
   if [ "$(id -u)" -ne 0 ]; then sudo="sudo"; else sudo=""; fi
   $sudo apt-get update -qq
   DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -qq --no-install-recommends "${need[@]}" >/dev/null
+fi
 fi
 
 # npm ci when node_modules is missing or older than the lockfile.

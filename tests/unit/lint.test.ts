@@ -9,6 +9,6 @@ const root = path.resolve(import.meta.dirname, "../..");
 describe("code style", () => {
   it("the whole tree is clean under `biome ci` (lint and format)", () => {
     const r = spawnSync(path.join(root, "node_modules/.bin/biome"), ["ci", "--colors=off", "--max-diagnostics=20", "."], { cwd: root, encoding: "utf8" });
-    expect(r.status, `${r.stdout}\n${r.stderr}`).toBe(0);
+    expect(r.status, r.error ? `Biome did not run (${r.error.message}): run npm ci first.` : `${r.stdout}\n${r.stderr}`).toBe(0);
   });
 });
