@@ -11,7 +11,8 @@ import { assertCanEditIntake, assertLead, assertVisible } from "../submissions/p
 import { findSubmission, updateSubmissionRow } from "../submissions/queries";
 import { toCelsius } from "../units/rules";
 import type { ConditionLimits } from "./conditions";
-import { findRun, insertRun, setAcceptance, setVoid, updateRunRow, type RunColumns, type RunRow } from "./queries";
+import { findRun, insertRun, listRunsOfSubmission, setAcceptance, setVoid, updateRunRow, type RunColumns, type RunRow } from "./queries";
+import { countingRun } from "./rules";
 import type { RunValues } from "./schema";
 import { toRunView, type RunView } from "./view";
 
@@ -144,8 +145,10 @@ export async function voidRun(actor: Actor, id: string, reason: string): Promise
       before: { voidedAt: before.voidedAt },
       after: { voidedAt: after.voidedAt, reason },
     });
-    // The ball's run before this one counts again, and may give it a result below the limit.
-    await notifyBelowLimit(trx, { runId: id, submissionId });
+    // The ball's run before this one counts again, and may give it a result below the limit: the
+    // check is on that run (the voided one's unsettled drops no longer hold the ball's result).
+    const counting = countingRun((await listRunsOfSubmission(trx, submissionId)).filter((r) => r.sampleId === run.sampleId));
+    if (counting) await notifyBelowLimit(trx, { runId: counting.id, submissionId });
     return after;
   });
 }

@@ -140,4 +140,20 @@ describe("a ball below the limit during testing", () => {
     expect(mails.filter((m) => m.text.includes("ball BL-4: mean 1.0 s"))).toHaveLength(1);
     expect(mails).toHaveLength(1);
   }, 300_000);
+
+  it("a ball is reported when voiding its re-test makes its earlier, read run count again", async () => {
+    const other = await newSubmission(lead, orgId, { receivedOn: "2005-07-02" });
+    const sample = await newSample(lead, other.id, { serial: "BL-5" });
+    const first = await newRun(lead, sample.id);
+    const firstDrops = (await placeOnRun(lead, first.id, { file: plainMp4(undefined, 4) })).dropIds;
+    // A re-test recorded by mistake, never read: it counts for the ball while it stands.
+    const retest = await newRun(lead, sample.id);
+    await placeOnRun(lead, retest.id, { file: plainMp4(undefined, 4) });
+    for (const d of firstDrops) await readBoth(d);
+    expect(await rowsOf(other.reference)).toEqual([]);
+    expect((await lead.post(`/api/runs/${retest.id}/void`, { reason: "Recorded on this ball by mistake." })).status).toBe(200);
+    const rows = await rowsOf(other.reference);
+    expect(rows).toHaveLength(1);
+    expect(rows[0].text).toContain("ball BL-5: mean 1.0 s");
+  }, 300_000);
 });
