@@ -9,7 +9,7 @@ import { readFrameCodes } from "@/lib/video/read-frame-codes";
 import { renderSyntheticClip } from "@/scripts/clips/synth-clip";
 import { signedIn, type Client } from "../helpers/app";
 import { CLIP_VARIANTS, variantFile } from "../helpers/clip-variants";
-import { copyEndFor, parsePacketCsv, trimArgs } from "@/app/_client/trim/trim-rules";
+import { copyEndFor, parsePacketCsv, trimArgs } from "@/lib/uploads/trim/trim-rules";
 import { listReportClips } from "@/lib/reports/queries";
 import { frameCodedMp4 } from "../helpers/clip-media";
 import { uploadFile, waitForClip } from "../helpers/clips";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { isAbort, PartError, sendFile, type Network, type Progress, type Transport, type UploadState } from "@/app/_client/upload/multipart";
-import { SignedUrls } from "@/app/_client/upload/signed-urls";
-import { SpeedMeter } from "@/app/_client/upload/speed";
+import { isAbort, PartError, sendFile, type Network, type Progress, type Transport, type UploadState } from "@/lib/uploads/browser/multipart";
+import { SignedUrls } from "@/lib/uploads/browser/signed-urls";
+import { SpeedMeter } from "@/lib/uploads/browser/speed";
 
 // A fake server and store: which parts are recorded, what was PUT, and failures on demand.
 function fakeServer(size: number, partSize: number, opts: { recorded?: number[]; failPut?: (n: number, attempt: number) => Error | null } = {}) {

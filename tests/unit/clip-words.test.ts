@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { containerName, describeIndex, groupDigits, indexDuration, proxyDecision } from "@/app/_client/clip-words";
+import { containerName, describeIndex, groupDigits, indexDuration, proxyDecision } from "@/lib/clips/words";
 import type { ClipView } from "@/lib/clips/view";
 
 const index = (over: Partial<NonNullable<ClipView["index"]>> = {}): NonNullable<ClipView["index"]> => ({

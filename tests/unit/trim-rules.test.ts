@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { canTrimInBrowser, copyEndFor, formatTime, parsePacketCsv, parseTime, rangeProblem, trimArgs, trimmedName } from "@/app/_client/trim/trim-rules";
+import { canTrimInBrowser, copyEndFor, formatTime, parsePacketCsv, parseTime, rangeProblem, trimArgs, trimmedName } from "@/lib/uploads/trim/trim-rules";
 
 describe("times typed by people", () => {
   it("reads seconds, m:ss and h:mm:ss, with a point or a comma", () => {

@@ -1,5 +1,5 @@
 import { requirePageActor } from "@/lib/auth/page-guard";
-import { FILTER_KEYS, type AuditFilters } from "@/app/_client/audit-filters";
+import { FILTER_KEYS, type AuditFilters } from "@/lib/audit/filters";
 import { AuditView } from "./_components/audit-view";
 
 export const metadata = { title: "Audit" };

@@ -3,7 +3,7 @@ import { ButtonLink } from "@/components/ui/button";
 import { requirePageActor } from "@/lib/auth/page-guard";
 import { canEditIntake } from "@/lib/submissions/policy";
 import { STAFF_ROLES } from "@/lib/users/rules";
-import { SubmissionList } from "@/app/_client/submission-list";
+import { SubmissionList } from "@/components/submissions/submission-list";
 import { SubmissionFilters } from "./_components/submission-filters";
 
 export const metadata = { title: "Submissions" };

@@ -1,7 +1,7 @@
 import { Suspense } from "react";
 import { requirePageActor } from "@/lib/auth/page-guard";
 import { ownOrganisation } from "@/lib/organisations/service";
-import { SubmissionList } from "@/app/_client/submission-list";
+import { SubmissionList } from "@/components/submissions/submission-list";
 
 export const metadata = { title: "Our submissions" };
 

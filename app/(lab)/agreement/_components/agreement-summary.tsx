@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
-import { milliseconds } from "@/app/_client/clip-words";
+import { milliseconds } from "@/lib/clips/words";
 import { Notice } from "@/components/ui/notice";
-import type { AgreementReport } from "@/app/_client/agreement";
+import type { AgreementReport } from "@/lib/agreement/hooks";
 import { signed } from "@/lib/numbers";
 import { signedMs } from "./numbers";
 

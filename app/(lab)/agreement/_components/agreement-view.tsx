@@ -2,8 +2,8 @@
 
 import { usePathname, useRouter } from "next/navigation";
 import { Notice } from "@/components/ui/notice";
-import { useAgreement } from "@/app/_client/agreement";
-import { apiError } from "@/app/_client/form-errors";
+import { useAgreement } from "@/lib/agreement/hooks";
+import { apiError } from "@/components/ui/form-errors";
 import { AgreementSummary } from "./agreement-summary";
 import { BlandAltmanChart } from "./bland-altman-chart";
 import { LargestTable } from "./largest-table";

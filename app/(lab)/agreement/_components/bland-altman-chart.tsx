@@ -6,7 +6,7 @@ import { ChartFigure } from "@/components/charts/chart-figure";
 import { ReferenceLegend } from "@/components/charts/legend";
 import { niceScale } from "@/components/charts/scale";
 import { AXIS, CHART_MARGIN, CHART_ROOT, GRID, REFERENCE, SERIES } from "@/components/charts/theme";
-import type { AgreementReport } from "@/app/_client/agreement";
+import type { AgreementReport } from "@/lib/agreement/hooks";
 import { signedMs, tableMs } from "./numbers";
 
 /** Bland–Altman plot: each drop's first − second against the mean of its two readings. */

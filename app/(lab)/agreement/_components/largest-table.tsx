@@ -1,7 +1,7 @@
 import Link from "next/link";
-import { milliseconds } from "@/app/_client/clip-words";
+import { milliseconds } from "@/lib/clips/words";
 import { LocalTime } from "@/components/ui/local-time";
-import type { AgreementReport } from "@/app/_client/agreement";
+import type { AgreementReport } from "@/lib/agreement/hooks";
 import { signedMs } from "./numbers";
 
 const COLUMNS = ["Drop", "Submission", "Sample", "First reading", "Second reading", "First − second", "Settled"];

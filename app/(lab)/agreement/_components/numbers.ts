@@ -1,4 +1,4 @@
-import { milliseconds } from "@/app/_client/clip-words";
+import { milliseconds } from "@/lib/clips/words";
 import { signed } from "@/lib/numbers";
 
 /** A signed time to the millisecond, with a real minus sign: "+0.033 s", "−1.200 s". */

@@ -1,5 +1,5 @@
-import { milliseconds } from "@/app/_client/clip-words";
-import type { AgreementReport } from "@/app/_client/agreement";
+import { milliseconds } from "@/lib/clips/words";
+import type { AgreementReport } from "@/lib/agreement/hooks";
 import { signedMs } from "./numbers";
 
 const COLUMNS = ["Reviewer", "Drops with an agreed value", "Mean bias (reading − agreed)", "Standard deviation"];

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { AuditEventView } from "@/app/_client/audit";
+import type { AuditEventView } from "@/lib/audit/hooks";
 import { LocalTime } from "@/components/ui/local-time";
 import { ChangeDiff } from "./change-diff";
 import { RECORD_KINDS, recordLabel } from "./audit-words";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState, type FormEvent } from "react";
-import { auditSearch, useAuditPeople, type AuditFilters } from "@/app/_client/audit";
+import { auditSearch, useAuditPeople, type AuditFilters } from "@/lib/audit/hooks";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";

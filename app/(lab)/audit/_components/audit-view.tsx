@@ -1,8 +1,8 @@
 "use client";
 
 import { usePathname, useRouter } from "next/navigation";
-import { auditSearch, useAudit, type AuditFilters } from "@/app/_client/audit";
-import { apiError } from "@/app/_client/form-errors";
+import { auditSearch, useAudit, type AuditFilters } from "@/lib/audit/hooks";
+import { apiError } from "@/components/ui/form-errors";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import { AuditEvent } from "./audit-event";

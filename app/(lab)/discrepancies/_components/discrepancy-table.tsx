@@ -3,8 +3,8 @@
 import Link from "next/link";
 import { LocalTime } from "@/components/ui/local-time";
 import { Notice } from "@/components/ui/notice";
-import { useDiscrepancies, type DropView } from "@/app/_client/drops";
-import { seconds } from "@/app/_client/clip-words";
+import { useDiscrepancies, type DropView } from "@/lib/drops/hooks";
+import { seconds } from "@/lib/clips/words";
 import { countingReadings } from "@/lib/readings/rules";
 import { signedSeconds } from "./reading-numbers";
 

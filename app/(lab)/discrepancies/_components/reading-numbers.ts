@@ -1,4 +1,4 @@
-import { seconds } from "@/app/_client/clip-words";
+import { seconds } from "@/lib/clips/words";
 
 /** A difference with its sign, so the reader sees which reading is longer: "+1.2 s", "−0.04 s", "0 s". */
 export function signedSeconds(s: number): string {

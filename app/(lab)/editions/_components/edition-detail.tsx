@@ -4,7 +4,7 @@ import Link from "next/link";
 import { ButtonLink } from "@/components/ui/button";
 import { formatDay, formatInstant } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
-import { useEdition } from "@/app/_client/editions";
+import { useEdition } from "@/lib/editions/hooks";
 import { displayValue, EDITION_VALUES } from "./edition-fields";
 
 export function EditionDetail({ id, isLead }: { id: string; isLead: boolean }) {

@@ -1,5 +1,5 @@
 import { BELOW_MINIMUM_RULE_LABELS, CRITERION_LABELS, type EDITION_FIELDS } from "@/lib/editions/schema";
-import type { EditionJson } from "@/app/_client/editions";
+import type { EditionJson } from "@/lib/editions/hooks";
 
 export type EditionField = (typeof EDITION_FIELDS)[number];
 

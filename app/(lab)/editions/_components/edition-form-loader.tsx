@@ -1,7 +1,7 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { useEdition } from "@/app/_client/editions";
+import { useEdition } from "@/lib/editions/hooks";
 import { EditionForm } from "./edition-form";
 
 /** The form waits for the edition it starts from, so every value and note is prefilled at once. */

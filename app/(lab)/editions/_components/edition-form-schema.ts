@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { editionInputSchema } from "@/lib/editions/schema";
-import type { EditionJson } from "@/app/_client/editions";
+import type { EditionJson } from "@/lib/editions/hooks";
 import { EDITION_VALUES } from "./edition-fields";
 
 // The API's own schema, except that round sizes are typed as one list ("2, 8, 24").

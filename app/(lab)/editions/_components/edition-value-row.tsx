@@ -5,7 +5,7 @@ import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { BELOW_MINIMUM_RULE_LABELS, BELOW_MINIMUM_RULES, CRITERIA, CRITERION_LABELS } from "@/lib/editions/schema";
-import { firstMessage } from "@/app/_client/form-errors";
+import { firstMessage } from "@/components/ui/form-errors";
 import { labelWithUnit, type EditionFieldMeta } from "./edition-fields";
 import type { EditionFormInput } from "./edition-form-schema";
 

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { formatDay } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
-import { useEditions } from "@/app/_client/editions";
+import { useEditions } from "@/lib/editions/hooks";
 import { displayValue } from "./edition-fields";
 
 const COLUMNS = ["Edition", "Effective from", "Minimum absorption time", "Criterion", "Drops per ball", "Guard band", "Round sizes", "Used by"];

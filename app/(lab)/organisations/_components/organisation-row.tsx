@@ -5,8 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import type { OrganisationRow as Organisation } from "@/lib/organisations/service";
-import { apiError } from "@/app/_client/form-errors";
-import { useSaveOrganisation } from "@/app/_client/organisations";
+import { apiError } from "@/components/ui/form-errors";
+import { useSaveOrganisation } from "@/lib/organisations/hooks";
 import { contactsError, parseContacts } from "./contacts";
 
 export function OrganisationRow({ organisation: o }: { organisation: Organisation }) {

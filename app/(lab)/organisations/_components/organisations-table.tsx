@@ -1,7 +1,7 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { useOrganisationList } from "@/app/_client/organisations";
+import { useOrganisationList } from "@/lib/organisations/hooks";
 import { OrganisationRow } from "./organisation-row";
 
 export function OrganisationsTable() {

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useWorkQueue } from "@/app/_client/drops";
+import { useWorkQueue } from "@/lib/drops/hooks";
 
 /** How many drops wait for the signed-in reviewer, as a way into the queue. */
 export function QueueCount() {

@@ -3,8 +3,8 @@
 import Link from "next/link";
 import { LocalTime } from "@/components/ui/local-time";
 import { Notice } from "@/components/ui/notice";
-import { useWorkQueue, type QueueItem } from "@/app/_client/drops";
-import { groupDigits } from "@/app/_client/clip-words";
+import { useWorkQueue, type QueueItem } from "@/lib/drops/hooks";
+import { groupDigits } from "@/lib/clips/words";
 
 const PROGRESS: Record<QueueItem["mine"], { words: string; style: string }> = {
   "not started": { words: "not started", style: "bg-ink-100 text-ink-800" },

@@ -5,9 +5,9 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { KINDS, STATUS_LABELS, STATUSES } from "@/lib/submissions/schema";
-import { useListState, type ListState } from "@/app/_client/list-state";
-import { useOrganisationList } from "@/app/_client/organisations";
-import { KIND_LABELS } from "@/app/_client/submission-labels";
+import { useListState, type ListState } from "@/lib/submissions/list-state";
+import { useOrganisationList } from "@/lib/organisations/hooks";
+import { KIND_LABELS } from "@/components/submissions/submission-labels";
 
 const SEARCH_DELAY_MS = 400;
 

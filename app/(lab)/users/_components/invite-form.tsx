@@ -7,7 +7,7 @@ import { Notice } from "@/components/ui/notice";
 import { ApiError } from "@/lib/http/client";
 import type { Role } from "@/lib/users/rules";
 import { RoleCheckboxes } from "./role-checkboxes";
-import { useOrganisationList } from "@/app/_client/organisations";
+import { useOrganisationList } from "@/lib/organisations/hooks";
 import { useInvite } from "./users-api";
 
 export function InviteForm() {

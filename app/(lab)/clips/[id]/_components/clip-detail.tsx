@@ -3,9 +3,9 @@
 import Link from "next/link";
 import { Notice } from "@/components/ui/notice";
 import { formatBytes } from "@/lib/numbers";
-import { inProgress, useClip } from "@/app/_client/clips";
-import { ClipStatusBadge, clipProblem } from "@/app/(lab)/_shared/clips/clip-status-badge";
-import { ClipSteps } from "@/app/(lab)/_shared/clips/clip-steps";
+import { inProgress, useClip } from "@/lib/clips/hooks";
+import { ClipStatusBadge, clipProblem } from "@/components/clips/clip-status-badge";
+import { ClipSteps } from "@/components/clips/clip-steps";
 import { ClipFacts } from "./clip-facts";
 import { ClipMedia } from "./clip-media";
 

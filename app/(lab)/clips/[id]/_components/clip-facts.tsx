@@ -1,8 +1,8 @@
 import { DetailList } from "@/components/ui/detail-list";
 import { LocalTime } from "@/components/ui/local-time";
 import { formatBytes } from "@/lib/numbers";
-import type { ClipView } from "@/app/_client/clips";
-import { containerName, describeIndex, indexDuration, proxyDecision, seconds } from "@/app/_client/clip-words";
+import type { ClipView } from "@/lib/clips/hooks";
+import { containerName, describeIndex, indexDuration, proxyDecision, seconds } from "@/lib/clips/words";
 import { ShaField } from "./sha-field";
 
 const pending = (what: string) => <span className="text-ink-600">{what}</span>;

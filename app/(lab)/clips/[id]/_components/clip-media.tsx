@@ -2,7 +2,7 @@
 
 import { FramePlayer } from "@/components/player/lazy-frame-player";
 import { Notice } from "@/components/ui/notice";
-import { useFrameIndex, type ClipView } from "@/app/_client/clips";
+import { useFrameIndex, type ClipView } from "@/lib/clips/hooks";
 
 /** The frame-exact player (view only, no marks), with the poster and filmstrip the worker made. */
 export function ClipMedia({ clip }: { clip: ClipView }) {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { useStartCorrection } from "@/app/_client/drops";
+import { useStartCorrection } from "@/lib/drops/hooks";
 import { ApiError } from "@/lib/http/client";
 import { Button } from "@/components/ui/button";
 import { TextareaField } from "@/components/ui/textarea-field";

@@ -1,6 +1,6 @@
 import Link from "next/link";
-import type { DropView } from "@/app/_client/drops";
-import { DropStateBadge } from "@/app/(lab)/_shared/drops/drop-state";
+import type { DropView } from "@/lib/drops/hooks";
+import { DropStateBadge } from "@/components/drops/drop-state";
 
 /** Which drop this is, where it sits, and what the viewer may know of its state. */
 export function DropHeader({ drop }: { drop: DropView }) {

@@ -1,7 +1,7 @@
 "use client";
 
-import { milliseconds } from "@/app/_client/clip-words";
-import { useDiscardDraft, useSubmitReading, type DropView } from "@/app/_client/drops";
+import { milliseconds } from "@/lib/clips/words";
+import { useDiscardDraft, useSubmitReading, type DropView } from "@/lib/drops/hooks";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { CorrectionForm } from "./correction-form";

@@ -3,8 +3,8 @@
 import { countingReadings } from "@/lib/readings/rules";
 import { isBeingRead } from "@/lib/drops/states";
 import { useMemo, useRef } from "react";
-import { useClip, useFrameIndex } from "@/app/_client/clips";
-import { useDrop, useSaveMarks, type DropView } from "@/app/_client/drops";
+import { useClip, useFrameIndex } from "@/lib/clips/hooks";
+import { useDrop, useSaveMarks, type DropView } from "@/lib/drops/hooks";
 import { FramePlayer, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
 import { MarkStatus, markButtonProps, useMarkGate } from "@/components/player/mark-gate";
 import { Button } from "@/components/ui/button";

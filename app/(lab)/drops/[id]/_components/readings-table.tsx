@@ -1,5 +1,5 @@
-import { milliseconds } from "@/app/_client/clip-words";
-import type { DropView } from "@/app/_client/drops";
+import { milliseconds } from "@/lib/clips/words";
+import type { DropView } from "@/lib/drops/hooks";
 import { LocalTime } from "@/components/ui/local-time";
 
 const s = (v: number | null | undefined) => (v === null || v === undefined ? "—" : milliseconds(v));

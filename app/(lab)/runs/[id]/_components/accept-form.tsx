@@ -1,6 +1,6 @@
 "use client";
 
-import { useAcceptRun } from "@/app/_client/runs";
+import { useAcceptRun } from "@/lib/runs/hooks";
 import { ReasonForm } from "./reason-form";
 
 /** A lead's acceptance of flagged conditions: the reason is kept with the run for the audit. */

@@ -3,8 +3,8 @@
 import Link from "next/link";
 import { LocalTime } from "@/components/ui/local-time";
 import { formatBytes } from "@/lib/numbers";
-import type { ClipView } from "@/app/_client/clips";
-import { ClipStatusBadge, clipProblem } from "@/app/(lab)/_shared/clips/clip-status-badge";
+import type { ClipView } from "@/lib/clips/hooks";
+import { ClipStatusBadge, clipProblem } from "@/components/clips/clip-status-badge";
 
 /** The run's recordings, newest last, each with its state and, when refused, the reason in words. */
 export function ClipList({ clips }: { clips: ClipView[] }) {

@@ -1,10 +1,10 @@
 "use client";
 
 import Link from "next/link";
-import type { ClipView } from "@/app/_client/clips";
-import type { DropView } from "@/app/_client/drops";
-import { groupDigits } from "@/app/_client/clip-words";
-import { DropStateBadge } from "@/app/(lab)/_shared/drops/drop-state";
+import type { ClipView } from "@/lib/clips/hooks";
+import type { DropView } from "@/lib/drops/hooks";
+import { groupDigits } from "@/lib/clips/words";
+import { DropStateBadge } from "@/components/drops/drop-state";
 import { PlaceDropForm } from "./place-drop-form";
 
 export function DropRow({ drop, readyClips, canEdit, canRead }: { drop: DropView; readyClips: ClipView[]; canEdit: boolean; canRead: boolean }) {

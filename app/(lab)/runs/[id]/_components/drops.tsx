@@ -1,8 +1,8 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { useRunClips } from "@/app/_client/clips";
-import { useRunDrops } from "@/app/_client/drops";
+import { useRunClips } from "@/lib/clips/hooks";
+import { useRunDrops } from "@/lib/drops/hooks";
 import { DropRow } from "./drop-row";
 
 /**

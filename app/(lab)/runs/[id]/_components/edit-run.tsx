@@ -1,9 +1,9 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { RunForm } from "@/app/(lab)/_shared/run-form/run-form";
-import { runDefaults } from "@/app/(lab)/_shared/run-form/run-form-schema";
-import { useUpdateRun, type RunDetail } from "@/app/_client/runs";
+import { RunForm } from "@/components/runs/run-form";
+import { runDefaults } from "@/components/runs/run-form-schema";
+import { useUpdateRun, type RunDetail } from "@/lib/runs/hooks";
 
 export function EditRun({ run, onSaved }: { run: RunDetail; onSaved: () => void }) {
   const update = useUpdateRun(run.id);

@@ -3,8 +3,8 @@
 import { useId, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { formatBytes } from "@/lib/numbers";
-import type { UploadJob } from "@/app/_client/upload/upload-jobs";
-import type { Uploads } from "@/app/_client/upload/use-uploads";
+import type { UploadJob } from "@/lib/uploads/browser/upload-jobs";
+import type { Uploads } from "@/lib/uploads/browser/use-uploads";
 
 const parts = (n: number) => (n === 1 ? "the part in flight" : `the ${n} parts in flight`);
 

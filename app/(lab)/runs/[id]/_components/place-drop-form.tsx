@@ -4,10 +4,10 @@ import { useState, type ChangeEvent, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { describedBy, FieldMessages } from "@/components/ui/field-messages";
 import { CONTROL_CLASS, SelectField } from "@/components/ui/select-field";
-import type { ClipView } from "@/app/_client/clips";
-import { groupDigits } from "@/app/_client/clip-words";
-import { usePlaceDrop, type DropView } from "@/app/_client/drops";
-import { apiError } from "@/app/_client/form-errors";
+import type { ClipView } from "@/lib/clips/hooks";
+import { groupDigits } from "@/lib/clips/words";
+import { usePlaceDrop, type DropView } from "@/lib/drops/hooks";
+import { apiError } from "@/components/ui/form-errors";
 
 /** Puts one drop on a ready recording at a start frame; the server judges the frame and says why it refuses. */
 export function PlaceDropForm({ drop, readyClips }: { drop: DropView; readyClips: ClipView[] }) {

@@ -3,9 +3,9 @@
 import Link from "next/link";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { useClip } from "@/app/_client/clips";
-import { ClipStatusBadge, clipProblem } from "@/app/(lab)/_shared/clips/clip-status-badge";
-import { ClipSteps } from "@/app/(lab)/_shared/clips/clip-steps";
+import { useClip } from "@/lib/clips/hooks";
+import { ClipStatusBadge, clipProblem } from "@/components/clips/clip-status-badge";
+import { ClipSteps } from "@/components/clips/clip-steps";
 
 /** After the last part: the server's processing steps, live, until the clip is ready or refused. */
 export function ProcessingStatus({ clipId, onDismiss }: { clipId: string; onDismiss: () => void }) {

@@ -4,7 +4,7 @@ import { useState, type FormEvent, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { apiError } from "@/app/_client/form-errors";
+import { apiError } from "@/components/ui/form-errors";
 
 const MIN_REASON = 10;
 

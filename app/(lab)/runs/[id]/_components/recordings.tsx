@@ -1,8 +1,8 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { useRunClips } from "@/app/_client/clips";
-import { useUploads } from "@/app/_client/upload/use-uploads";
+import { useRunClips } from "@/lib/clips/hooks";
+import { useUploads } from "@/lib/uploads/browser/use-uploads";
 import { ClipList } from "./clip-list";
 import { ResumeOffers } from "./resume-offers";
 import { Uploader } from "./uploader";

@@ -3,8 +3,8 @@
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { formatBytes } from "@/lib/numbers";
-import { useUploadState, type ClipView } from "@/app/_client/clips";
-import { listPending, readable, removePending, sameFile, type PendingUpload } from "@/app/_client/upload/pending-store";
+import { useUploadState, type ClipView } from "@/lib/clips/hooks";
+import { listPending, readable, removePending, sameFile, type PendingUpload } from "@/lib/uploads/browser/pending-store";
 
 type Kept = { entry: PendingUpload; readable: boolean };
 type Resume = (clipId: string, file: File, kept: boolean) => void;

@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { ConditionWarnings } from "@/components/ui/condition-warnings";
 import { formatInstant } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
-import { useRun, type RunDetail as RunDetailData } from "@/app/_client/runs";
+import { useRun, type RunDetail as RunDetailData } from "@/lib/runs/hooks";
 import { AcceptForm } from "./accept-form";
 import { Drops } from "./drops";
 import { EditRun } from "./edit-run";

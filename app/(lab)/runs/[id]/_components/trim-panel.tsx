@@ -3,8 +3,8 @@
 import { useEffect, useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import type { TrimSource } from "@/lib/clips/schema";
-import { formatTime, parseTime, rangeProblem, trimmedNote } from "@/app/_client/trim/trim-rules";
-import { useTrim } from "@/app/_client/trim/use-trim";
+import { formatTime, parseTime, rangeProblem, trimmedNote } from "@/lib/uploads/trim/trim-rules";
+import { useTrim } from "@/lib/uploads/trim/use-trim";
 import { TimeField } from "./time-field";
 
 function useObjectUrl(file: File): string | null {

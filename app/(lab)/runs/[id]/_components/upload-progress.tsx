@@ -2,8 +2,8 @@
 
 import { ProgressBar } from "@/components/ui/progress-bar";
 import { formatBytes } from "@/lib/numbers";
-import { formatDuration, formatSpeed } from "@/app/_client/upload/speed";
-import type { UploadJob } from "@/app/_client/upload/upload-jobs";
+import { formatDuration, formatSpeed } from "@/lib/uploads/browser/speed";
+import type { UploadJob } from "@/lib/uploads/browser/upload-jobs";
 
 /** Bytes sent of the total, speed, time left and stored parts; and what the engine is waiting for. */
 export function UploadProgress({ job }: { job: UploadJob }) {

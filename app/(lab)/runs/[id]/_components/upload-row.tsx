@@ -3,9 +3,9 @@
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { formatBytes } from "@/lib/numbers";
-import { canTrimInBrowser, TRIM_MAX_BYTES } from "@/app/_client/trim/trim-rules";
-import { isActive, type UploadJob } from "@/app/_client/upload/upload-jobs";
-import type { Uploads } from "@/app/_client/upload/use-uploads";
+import { canTrimInBrowser, TRIM_MAX_BYTES } from "@/lib/uploads/trim/trim-rules";
+import { isActive, type UploadJob } from "@/lib/uploads/browser/upload-jobs";
+import type { Uploads } from "@/lib/uploads/browser/use-uploads";
 import { PauseControls } from "./pause-controls";
 import { ProcessingStatus } from "./processing-status";
 import { TrimPanel } from "./trim-panel";

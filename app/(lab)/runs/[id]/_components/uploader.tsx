@@ -1,7 +1,7 @@
 "use client";
 
 import { Button } from "@/components/ui/button";
-import type { Uploads } from "@/app/_client/upload/use-uploads";
+import type { Uploads } from "@/lib/uploads/browser/use-uploads";
 import { UploadRow } from "./upload-row";
 
 // Only a hint for the file picker: what is accepted is decided by ffprobe on the stored bytes.

@@ -1,6 +1,6 @@
 "use client";
 
-import { useVoidRun } from "@/app/_client/runs";
+import { useVoidRun } from "@/lib/runs/hooks";
 import { ReasonForm } from "./reason-form";
 
 /** A lead voids a run that must not count. Final: the run stays on record, shown as voided. */

@@ -7,8 +7,8 @@ import { Field } from "@/components/ui/field";
 import { MeasureField } from "@/components/ui/measure-field";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { apiError } from "@/app/_client/form-errors";
-import { useAddSample } from "@/app/_client/submissions";
+import { apiError } from "@/components/ui/form-errors";
+import { useAddSample } from "@/lib/submissions/hooks";
 
 export const MASS_UNITS = [
   { value: "g", label: "g" },

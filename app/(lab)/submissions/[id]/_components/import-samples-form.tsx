@@ -7,8 +7,8 @@ import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { apiError } from "@/app/_client/form-errors";
-import { useImportSamples } from "@/app/_client/submissions";
+import { apiError } from "@/components/ui/form-errors";
+import { useImportSamples } from "@/lib/submissions/hooks";
 import { MASS_UNITS } from "./add-sample-form";
 import { CsvRowErrors } from "./csv-row-errors";
 

@@ -6,8 +6,8 @@ import { formatDay } from "@/components/ui/dates";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { apiError } from "@/app/_client/form-errors";
-import { useNextRound, useRequestSamples, useSampleRequests } from "@/app/_client/sample-requests";
+import { apiError } from "@/components/ui/form-errors";
+import { useNextRound, useRequestSamples, useSampleRequests } from "@/lib/sample-requests/hooks";
 
 const inTwoWeeks = () => new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10);
 

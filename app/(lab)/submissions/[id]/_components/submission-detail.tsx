@@ -1,7 +1,7 @@
 "use client";
 
 import { Notice } from "@/components/ui/notice";
-import { useSubmission } from "@/app/_client/submissions";
+import { useSubmission } from "@/lib/submissions/hooks";
 import { AddSampleForm } from "./add-sample-form";
 import { ImportSamplesForm } from "./import-samples-form";
 import { RoundSamples } from "./round-samples";

@@ -5,7 +5,7 @@ import { formatDay } from "@/components/ui/dates";
 import { DetailList } from "@/components/ui/detail-list";
 import { editionInBrief } from "@/lib/editions/words";
 import type { StaffSubmissionDetail } from "@/lib/submissions/view";
-import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
+import { KIND_LABELS, StatusBadge } from "@/components/submissions/submission-labels";
 
 const link = "font-semibold text-wick-700 underline";
 

@@ -2,7 +2,7 @@
 
 import type { UseFormRegisterReturn } from "react-hook-form";
 import { SelectField } from "@/components/ui/select-field";
-import { useSubmissionPage } from "@/app/_client/submissions";
+import { useSubmissionPage } from "@/lib/submissions/hooks";
 
 /** The approval submissions of the chosen organisation, for linking a surveillance submission. */
 export function ApprovalSelect({ organisationId, error, registration }: { organisationId: string; error?: string; registration: UseFormRegisterReturn }) {

@@ -11,10 +11,10 @@ import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { KINDS, submissionInputSchema, type SubmissionInput, type SubmissionValues } from "@/lib/submissions/schema";
-import { apiError, firstMessage, placeServerErrors } from "@/app/_client/form-errors";
-import { useOrganisationList } from "@/app/_client/organisations";
-import { KIND_LABELS } from "@/app/_client/submission-labels";
-import { useCreateSubmission } from "@/app/_client/submissions";
+import { apiError, firstMessage, placeServerErrors } from "@/components/ui/form-errors";
+import { useOrganisationList } from "@/lib/organisations/hooks";
+import { KIND_LABELS } from "@/components/submissions/submission-labels";
+import { useCreateSubmission } from "@/lib/submissions/hooks";
 import { ApprovalSelect } from "./approval-select";
 
 const WEIGHT_CLASSES = Array.from({ length: 11 }, (_, i) => i + 6);

@@ -1,4 +1,4 @@
-import * as uploads from "@/lib/clips/upload-service";
+import * as uploads from "@/lib/uploads/service";
 import { idParam, route } from "@/lib/http/route";
 
 // POST /api/clips/:id/complete — finish the upload and start processing; a second call changes nothing.

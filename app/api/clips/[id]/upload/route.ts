@@ -1,4 +1,4 @@
-import * as uploads from "@/lib/clips/upload-service";
+import * as uploads from "@/lib/uploads/service";
 import { idParam, route } from "@/lib/http/route";
 
 // GET /api/clips/:id/upload — the parts the server has recorded, to resume an interrupted upload.

@@ -1,6 +1,6 @@
 import { startUploadSchema } from "@/lib/clips/schema";
 import * as clips from "@/lib/clips/service";
-import * as uploads from "@/lib/clips/upload-service";
+import * as uploads from "@/lib/uploads/service";
 import { idParam, route } from "@/lib/http/route";
 
 // GET /api/runs/:id/clips — the run's recordings with their processing state.

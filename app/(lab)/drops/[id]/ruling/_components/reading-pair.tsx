@@ -1,8 +1,8 @@
 "use client";
 
 import { countingReadings } from "@/lib/readings/rules";
-import { milliseconds as s } from "@/app/_client/clip-words";
-import type { DropView, ReadingView } from "@/app/_client/drops";
+import { milliseconds as s } from "@/lib/clips/words";
+import type { DropView, ReadingView } from "@/lib/drops/hooks";
 import { signedSeconds } from "@/app/(lab)/discrepancies/_components/reading-numbers";
 
 function Column({ title, r, onJump }: { title: string; r: ReadingView | undefined; onJump: (f: number) => void }) {

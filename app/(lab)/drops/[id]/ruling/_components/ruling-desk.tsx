@@ -2,10 +2,10 @@
 
 import { countingReadings } from "@/lib/readings/rules";
 import { useMemo, useRef, useState } from "react";
-import { milliseconds as s } from "@/app/_client/clip-words";
-import { useClip, useFrameIndex } from "@/app/_client/clips";
-import { useDrop } from "@/app/_client/drops";
-import { useRuling } from "@/app/_client/rulings";
+import { milliseconds as s } from "@/lib/clips/words";
+import { useClip, useFrameIndex } from "@/lib/clips/hooks";
+import { useDrop } from "@/lib/drops/hooks";
+import { useRuling } from "@/lib/rulings/hooks";
 import { FramePlayer, type FramePlayerControl, type PlayerMark } from "@/components/player/lazy-frame-player";
 import { MarkStatus, useMarkGate } from "@/components/player/mark-gate";
 import { Notice } from "@/components/ui/notice";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { useRuleDrop } from "@/app/_client/rulings";
+import { useRuleDrop } from "@/lib/rulings/hooks";
 import { ApiError } from "@/lib/http/client";
 import { rulingSchema } from "@/lib/rulings/schema";
 import { Button } from "@/components/ui/button";

@@ -1,4 +1,4 @@
-import type { BallResultView } from "@/app/_client/results";
+import type { BallResultView } from "@/lib/results/hooks";
 import type { Decision } from "@/lib/results/decision";
 
 // Words first, colour second: every badge says what it means.

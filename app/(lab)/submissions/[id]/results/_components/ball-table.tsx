@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { s1, s3, sJudged, type BallResultView, type ResultsView } from "@/app/_client/results";
+import { s1, s3, sJudged, type BallResultView, type ResultsView } from "@/lib/results/hooks";
 import { BallStatus } from "./ball-status";
 
 const th = "px-3 py-2 font-semibold";

@@ -1,4 +1,4 @@
-import { s1, type ResultsView } from "@/app/_client/results";
+import { s1, type ResultsView } from "@/lib/results/hooks";
 import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
 import { pct, secsAgainst } from "@/lib/results/words";

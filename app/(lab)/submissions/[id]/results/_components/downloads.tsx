@@ -1,2 +1,2 @@
 // The lab's results page and the manufacturer's portal offer the same files.
-export { Downloads } from "@/app/_client/report-downloads";
+export { Downloads } from "@/components/reports/report-downloads";

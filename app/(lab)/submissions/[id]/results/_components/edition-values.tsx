@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { ResultsView } from "@/app/_client/results";
+import type { ResultsView } from "@/lib/results/hooks";
 import { BELOW_MINIMUM_RULE_LABELS, CRITERION_LABELS } from "@/lib/editions/schema";
 
 /** The edition's values these results were judged by, each with where it comes from. */

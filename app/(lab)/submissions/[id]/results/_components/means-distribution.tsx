@@ -1,7 +1,7 @@
 "use client";
 
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceLine, Scatter, XAxis, YAxis } from "recharts";
-import type { ResultsView } from "@/app/_client/results";
+import type { ResultsView } from "@/lib/results/hooks";
 import { xAxisLabel, yAxisLabel } from "@/components/charts/axis-label";
 import { ChartFigure } from "@/components/charts/chart-figure";
 import { ReferenceLegend } from "@/components/charts/legend";

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState, type FormEvent } from "react";
-import { apiError } from "@/app/_client/form-errors";
-import { useReopen } from "@/app/_client/signoff";
+import { apiError } from "@/components/ui/form-errors";
+import { useReopen } from "@/lib/signoff/hooks";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";

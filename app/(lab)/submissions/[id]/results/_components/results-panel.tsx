@@ -1,8 +1,8 @@
 "use client";
 
 import type { ReactNode } from "react";
-import { useSubmissionResults } from "@/app/_client/results";
-import { KIND_LABELS } from "@/app/_client/submission-labels";
+import { useSubmissionResults } from "@/lib/results/hooks";
+import { KIND_LABELS } from "@/components/submissions/submission-labels";
 import { Caution } from "@/components/shell/caution";
 import { Notice } from "@/components/ui/notice";
 import { BallTable } from "./ball-table";

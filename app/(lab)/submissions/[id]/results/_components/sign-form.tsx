@@ -1,9 +1,9 @@
 "use client";
 
 import { useState, type FormEvent } from "react";
-import { apiError } from "@/app/_client/form-errors";
-import { useSubmissionResults } from "@/app/_client/results";
-import { useSignResults } from "@/app/_client/signoff";
+import { apiError } from "@/components/ui/form-errors";
+import { useSubmissionResults } from "@/lib/results/hooks";
+import { useSignResults } from "@/lib/signoff/hooks";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";

@@ -1,6 +1,6 @@
 "use client";
 
-import type { SignatureView, SignOffView } from "@/app/_client/signoff";
+import type { SignatureView, SignOffView } from "@/lib/signoff/hooks";
 import { LocalTime } from "@/components/ui/local-time";
 import { changeLines } from "./change-lines";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useSignOff } from "@/app/_client/signoff";
+import { useSignOff } from "@/lib/signoff/hooks";
 import { Notice } from "@/components/ui/notice";
 import { ReopenForm } from "./reopen-form";
 import { SignForm } from "./sign-form";

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { s1, type ResultsView } from "@/app/_client/results";
+import { s1, type ResultsView } from "@/lib/results/hooks";
 import { DetailList } from "@/components/ui/detail-list";
 import { signed } from "@/lib/numbers";
 import { DecisionBadge } from "./ball-status";

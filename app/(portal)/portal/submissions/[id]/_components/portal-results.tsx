@@ -1,8 +1,8 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { Downloads } from "@/app/_client/report-downloads";
-import { s1, sJudged, useSubmissionResults } from "@/app/_client/results";
+import { Downloads } from "@/components/reports/report-downloads";
+import { s1, sJudged, useSubmissionResults } from "@/lib/results/hooks";
 import { Caution } from "@/components/shell/caution";
 import { DetailList } from "@/components/ui/detail-list";
 import { LocalTime } from "@/components/ui/local-time";

@@ -8,8 +8,8 @@ import { Field } from "@/components/ui/field";
 import { LocalTime } from "@/components/ui/local-time";
 import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { apiError } from "@/app/_client/form-errors";
-import { useAcknowledgeRequest, useSampleRequests, type SampleRequest } from "@/app/_client/sample-requests";
+import { apiError } from "@/components/ui/form-errors";
+import { useAcknowledgeRequest, useSampleRequests, type SampleRequest } from "@/lib/sample-requests/hooks";
 
 // The lab's requests for more samples, as the manufacturer sees them, each acknowledged here with
 // how and when the samples are shipped. The lab sees the reply on its own submission page.

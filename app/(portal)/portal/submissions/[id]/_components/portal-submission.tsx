@@ -3,8 +3,8 @@
 import { formatDay } from "@/components/ui/dates";
 import { DetailList } from "@/components/ui/detail-list";
 import { Notice } from "@/components/ui/notice";
-import { KIND_LABELS, StatusBadge } from "@/app/_client/submission-labels";
-import { useSubmission } from "@/app/_client/submissions";
+import { KIND_LABELS, StatusBadge } from "@/components/submissions/submission-labels";
+import { useSubmission } from "@/lib/submissions/hooks";
 import { PortalResults } from "./portal-results";
 import { PortalSampleRequests } from "./portal-sample-requests";
 

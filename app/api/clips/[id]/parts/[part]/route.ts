@@ -1,5 +1,5 @@
 import { recordPartSchema } from "@/lib/clips/schema";
-import * as uploads from "@/lib/clips/upload-service";
+import * as uploads from "@/lib/uploads/service";
 import { AppError } from "@/lib/errors";
 import { idParam, param, route } from "@/lib/http/route";
 

@@ -1,5 +1,5 @@
 import { signPartsSchema } from "@/lib/clips/schema";
-import * as uploads from "@/lib/clips/upload-service";
+import * as uploads from "@/lib/uploads/service";
 import { idParam, route } from "@/lib/http/route";
 
 // POST /api/clips/:id/parts/sign — presigned URLs for the browser to PUT these parts to storage.

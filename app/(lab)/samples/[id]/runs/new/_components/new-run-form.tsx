@@ -1,9 +1,9 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { RunForm } from "@/app/(lab)/_shared/run-form/run-form";
-import { blankRun, type RunLimits } from "@/app/(lab)/_shared/run-form/run-form-schema";
-import { useRecordRun } from "@/app/_client/runs";
+import { RunForm } from "@/components/runs/run-form";
+import { blankRun, type RunLimits } from "@/components/runs/run-form-schema";
+import { useRecordRun } from "@/lib/runs/hooks";
 
 export function NewRunForm({ sampleId, limits }: { sampleId: string; limits: RunLimits }) {
   const router = useRouter();

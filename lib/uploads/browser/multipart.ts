@@ -6,10 +6,10 @@
 // others. Pausing (`pause`) starts no new part and lets the parts in flight finish and be recorded,
 // so nothing sent is lost; stopping (`signal`: leaving the page, removing the upload) aborts the
 // parts in flight at once, and the next start sends them again.
-import { abortableSleep, defaultBackoff, isRetriable, PartError, pausedError, isAbort } from "./errors";
-import { SignedUrls } from "./signed-urls";
+import { abortableSleep, defaultBackoff, isRetriable, PartError, pausedError, isAbort } from "@/lib/uploads/browser/errors";
+import { SignedUrls } from "@/lib/uploads/browser/signed-urls";
 
-export { isAbort, PartError, pausedError } from "./errors";
+export { isAbort, PartError, pausedError } from "@/lib/uploads/browser/errors";
 
 export interface UploadState {
   status: string;

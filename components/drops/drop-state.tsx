@@ -1,4 +1,4 @@
-import type { DropView } from "@/app/_client/drops";
+import type { DropView } from "@/lib/drops/hooks";
 
 type Tone = "plain" | "waiting" | "good" | "bad";
 

@@ -1,7 +1,7 @@
 // Reads, with ffprobe in the browser, the timestamps of the video packets around the end of a
 // trim, so the stream copy can be cut where no stray frame slips in (see copyEndFor).
 import type { FFmpeg } from "@ffmpeg/ffmpeg";
-import { parsePacketCsv, type PacketTime } from "./trim-rules";
+import { parsePacketCsv, type PacketTime } from "@/lib/uploads/trim/trim-rules";
 
 const AROUND_S = 5;
 

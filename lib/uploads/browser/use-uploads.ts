@@ -2,12 +2,12 @@
 
 import { useCallback, useEffect, useReducer, useRef } from "react";
 import type { TrimSource } from "@/lib/clips/schema";
-import { useRefreshRunClips } from "../clips";
-import { isAbort, sendFile, type Progress } from "./multipart";
-import { removePending, savePending } from "./pending-store";
-import { SpeedMeter } from "./speed";
-import { browserNetwork, browserTransport, startUpload } from "./transport";
-import { jobsReducer, newJob, type UploadJob } from "./upload-jobs";
+import { useRefreshRunClips } from "@/lib/clips/hooks";
+import { isAbort, sendFile, type Progress } from "@/lib/uploads/browser/multipart";
+import { removePending, savePending } from "@/lib/uploads/browser/pending-store";
+import { SpeedMeter } from "@/lib/uploads/browser/speed";
+import { browserNetwork, browserTransport, startUpload } from "@/lib/uploads/browser/transport";
+import { jobsReducer, newJob, type UploadJob } from "@/lib/uploads/browser/upload-jobs";
 
 const REDRAW_MS = 250;
 const words = (e: unknown) => (e instanceof Error ? e.message : "The upload stopped for an unknown reason.");

@@ -10,9 +10,17 @@ import { Notice } from "@/components/ui/notice";
 import { TextareaField } from "@/components/ui/textarea-field";
 import type { RunInput } from "@/lib/runs/schema";
 import { formatTemperature } from "@/lib/units/rules";
-import { apiError, placeServerErrors } from "@/app/_client/form-errors";
-import { RoughnessReadings } from "./roughness-readings";
-import { DISPENSER_UNITS, formPath, runFormSchema, TEMPERATURE_UNITS, type RunFormInput, type RunFormOutput, type RunLimits } from "./run-form-schema";
+import { apiError, placeServerErrors } from "@/components/ui/form-errors";
+import { RoughnessReadings } from "@/components/runs/roughness-readings";
+import {
+  DISPENSER_UNITS,
+  formPath,
+  runFormSchema,
+  TEMPERATURE_UNITS,
+  type RunFormInput,
+  type RunFormOutput,
+  type RunLimits,
+} from "@/components/runs/run-form-schema";
 
 const section = "grid gap-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm md:grid-cols-2";
 const legend = "text-lg font-semibold float-left w-full md:col-span-2";

@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import type { AuditEventView } from "@/lib/audit/view";
 import type { UserView } from "@/lib/users/view";
-import { auditSearch, type AuditFilters } from "./audit-filters";
+import { auditSearch, type AuditFilters } from "@/lib/audit/filters";
 
 export type { AuditEventView, AuditFilters };
 export { auditSearch };

@@ -1,8 +1,8 @@
 // The browser's side of the clip upload API, and the PUT of one part straight to storage.
 import type { TrimSource } from "@/lib/clips/schema";
 import { fetchJson } from "@/lib/http/client";
-import { PartError, pausedError } from "./errors";
-import type { Network, Transport, UploadState } from "./multipart";
+import { PartError, pausedError } from "@/lib/uploads/browser/errors";
+import type { Network, Transport, UploadState } from "@/lib/uploads/browser/multipart";
 
 export interface StartAnswer {
   clipId: string;

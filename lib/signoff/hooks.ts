@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import type { ReopenInput, SignInput } from "@/lib/signoff/schema";
 import type { SignOffView } from "@/lib/signoff/service";
-import { SUBMISSIONS } from "./submissions";
+import { SUBMISSIONS } from "@/lib/submissions/hooks";
 
 export type { SignOffView };
 export type SignatureView = SignOffView["signatures"][number];

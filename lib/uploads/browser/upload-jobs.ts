@@ -1,5 +1,5 @@
 // The uploads a page is handling, as plain state: one job per picked file. Pure (a reducer).
-import type { Waiting } from "./multipart";
+import type { Waiting } from "@/lib/uploads/browser/multipart";
 
 export type Stage =
   | "picked" // chosen, not started: the person may trim it first

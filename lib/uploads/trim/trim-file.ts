@@ -3,11 +3,11 @@
 // (copyEndFor), so the clip holds every frame up to the chosen end and no stray one after it. The input is mounted read-only (WORKERFS)
 // instead of copied into wasm memory; the output is held in memory until it is returned as a File.
 import type { FFFSType, LogEvent } from "@ffmpeg/ffmpeg";
-import { guessType } from "../upload/transport";
-import { loadFfmpeg } from "./ffmpeg-loader";
+import { guessType } from "@/lib/uploads/browser/transport";
+import { loadFfmpeg } from "@/lib/uploads/trim/ffmpeg-loader";
 import type { TrimSource } from "@/lib/clips/schema";
-import { packetsAround, startTimeOf } from "./trim-probe";
-import { copyEndFor, secondsLabel, splitName, trimArgs, trimmedName } from "./trim-rules";
+import { packetsAround, startTimeOf } from "@/lib/uploads/trim/trim-probe";
+import { copyEndFor, secondsLabel, splitName, trimArgs, trimmedName } from "@/lib/uploads/trim/trim-rules";
 
 let runs = 0;
 

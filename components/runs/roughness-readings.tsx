@@ -4,7 +4,7 @@ import { useFieldArray, useWatch, type Control, type FieldErrors, type UseFormRe
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { roughnessSummary } from "@/lib/runs/conditions";
-import type { RunFormInput, RunFormOutput, RunLimits } from "./run-form-schema";
+import type { RunFormInput, RunFormOutput, RunLimits } from "@/components/runs/run-form-schema";
 
 const MAX_READINGS = 30;
 

@@ -1,8 +1,8 @@
 "use client";
 
 import { useCallback, useState } from "react";
-import { loadFfmpeg } from "./ffmpeg-loader";
-import { trimFile } from "./trim-file";
+import { loadFfmpeg } from "@/lib/uploads/trim/ffmpeg-loader";
+import { trimFile } from "@/lib/uploads/trim/trim-file";
 
 export interface TrimState {
   phase: "idle" | "loading" | "trimming" | "error";

@@ -7,9 +7,9 @@ import { DataTable } from "@/components/ui/data-table";
 import { formatDay } from "@/components/ui/dates";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
-import { listSearch, useListState, type SortKey } from "./list-state";
-import { KIND_LABELS, StatusBadge } from "./submission-labels";
-import { useSubmissionPage, type SubmissionRow } from "./submissions";
+import { listSearch, useListState, type SortKey } from "@/lib/submissions/list-state";
+import { KIND_LABELS, StatusBadge } from "@/components/submissions/submission-labels";
+import { useSubmissionPage, type SubmissionRow } from "@/lib/submissions/hooks";
 
 const col = createColumnHelper<SubmissionRow>();
 

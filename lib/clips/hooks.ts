@@ -4,7 +4,7 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useCallback } from "react";
 import type { ClipView } from "@/lib/clips/view";
 import { fetchJson } from "@/lib/http/client";
-import type { UploadState } from "./upload/multipart";
+import type { UploadState } from "@/lib/uploads/browser/multipart";
 
 export type { ClipView };
 

@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import type { RulingInput } from "@/lib/rulings/schema";
 import type { RulingView } from "@/lib/rulings/view";
-import { DROPS } from "./drops";
+import { DROPS } from "@/lib/drops/hooks";
 
 export type { RulingView };
 const rulingKey = (dropId: string) => [...DROPS, "ruling", dropId] as const;

@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import type { SampleRequest } from "@/lib/sample-requests/view";
 import type { AcknowledgeInput, SampleRequestInput } from "@/lib/sample-requests/schema";
-import { SUBMISSIONS } from "./submissions";
+import { SUBMISSIONS } from "@/lib/submissions/hooks";
 
 export type { SampleRequest };
 

@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import type { RunInput } from "@/lib/runs/schema";
 import type { RunView } from "@/lib/runs/view";
-import { SUBMISSIONS } from "./submissions";
+import { SUBMISSIONS } from "@/lib/submissions/hooks";
 
 /** `lockedReason`: why no change can be made while the submission is signed off (null while it can). */
 export type RunDetail = RunView & { submissionId: string; sampleSerial: string; lockedReason: string | null };

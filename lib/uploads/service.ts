@@ -1,21 +1,21 @@
 import { randomUUID } from "node:crypto";
 import type { z } from "zod";
-import type { Actor } from "../auth/actor";
-import { recordChange } from "../audit/record";
-import { db } from "../db";
-import { env } from "../env";
-import { AppError } from "../errors";
-import { enqueue } from "../jobs";
-import { completeMultipartUpload, createMultipartUpload, headObject, objectExists, presignUploadPart } from "../storage";
-import { assertUnlocked } from "../signoff/lock";
-import { assertCanEditIntake } from "../submissions/policy";
-import { visibleClip, visibleRunForClips } from "./access";
-import { findUpload, insertClip, insertSteps, insertUpload, listParts, markUploadCompleted, updateClip, upsertPart } from "./queries";
-import { clipObjectKey } from "./object-keys";
-import { formatBytes } from "../numbers";
-import { planParts } from "./upload-rules";
-import { STEPS } from "./rules";
-import type { recordPartSchema, startUploadSchema } from "./schema";
+import type { Actor } from "@/lib/auth/actor";
+import { recordChange } from "@/lib/audit/record";
+import { db } from "@/lib/db";
+import { env } from "@/lib/env";
+import { AppError } from "@/lib/errors";
+import { enqueue } from "@/lib/jobs";
+import { completeMultipartUpload, createMultipartUpload, headObject, objectExists, presignUploadPart } from "@/lib/storage";
+import { assertUnlocked } from "@/lib/signoff/lock";
+import { assertCanEditIntake } from "@/lib/submissions/policy";
+import { visibleClip, visibleRunForClips } from "@/lib/clips/access";
+import { findUpload, insertClip, insertSteps, insertUpload, listParts, markUploadCompleted, updateClip, upsertPart } from "@/lib/clips/queries";
+import { clipObjectKey } from "@/lib/clips/object-keys";
+import { formatBytes } from "@/lib/numbers";
+import { planParts } from "@/lib/uploads/rules";
+import { STEPS } from "@/lib/clips/rules";
+import type { recordPartSchema, startUploadSchema } from "@/lib/clips/schema";
 
 type In<T extends z.ZodType> = z.output<T>;
 
