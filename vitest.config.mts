@@ -2,7 +2,8 @@ import path from "node:path";
 import { defineConfig } from "vitest/config";
 
 // Projects in one run: `npm test` starts the services first and reads the totals of all of them.
-const alias = { "@": path.resolve(import.meta.dirname) };
+// `server-only` resolves as in Next's server bundles (to its empty module): the tests run server code in node.
+const alias = { "@": path.resolve(import.meta.dirname), "server-only": path.resolve(import.meta.dirname, "node_modules/server-only/empty.js") };
 // Tests that kill the shared worker: the worker is one process for the whole run, so while it is
 // down (and until the jobs it held expire) every other file's jobs and mails would wait on it. They
 // run in a project of their own (groupOrder 1), one file at a time, once the unit and integration

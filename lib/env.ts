@@ -1,3 +1,4 @@
+import "server-only";
 import { z } from "zod";
 
 // Every setting the app, the worker and the scripts read. Local defaults match what

@@ -1,3 +1,4 @@
+import "server-only";
 import { db, pingDb } from "./db";
 import { AppError } from "./errors";
 

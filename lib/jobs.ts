@@ -1,3 +1,4 @@
+import "server-only";
 import PgBoss from "pg-boss";
 import { env } from "./env";
 

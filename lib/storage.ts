@@ -1,3 +1,4 @@
+import "server-only";
 import { createHash } from "node:crypto";
 import { createReadStream } from "node:fs";
 import { stat } from "node:fs/promises";

@@ -1,11 +1,9 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
-import { pathToFileURL } from "node:url";
-import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor } from "./services/service";
+import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, SERVER_TS_ARGS, spawnLogged, stopChild, waitFor } from "./services/service";
 
 const NEXT_BIN = path.join(projectRoot, "node_modules", "next", "dist", "bin", "next");
-const TSX_LOADER = pathToFileURL(path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs")).href;
 const BUILD_INPUTS = [
   "app",
   "components",
@@ -71,7 +69,7 @@ export async function startWorker(env: Record<string, string>, logFile: string):
   let child: ChildProcess;
   const launch = async () => {
     const offset = logSize(logFile);
-    child = spawnLogged("worker", process.execPath, ["--import", TSX_LOADER, path.join(projectRoot, "worker", "index.ts")], {
+    child = spawnLogged("worker", process.execPath, [...SERVER_TS_ARGS, path.join(projectRoot, "worker", "index.ts")], {
       logFile,
       env: { ...process.env, ...env },
     });

@@ -37,5 +37,6 @@ fi
 # `dev` is `start` with next dev and hot reload.
 if [ "$cmd" = dev ]; then cmd=start; set -- --dev "$@"; fi
 # npm does not pass SIGTERM on through its shell; the parent-death signal makes sure the
-# orchestrator (and with it every service) stops when npm is stopped.
-exec setpriv --pdeathsig=TERM -- node --import ./node_modules/tsx/dist/loader.mjs "scripts/$cmd.ts" "$@"
+# orchestrator (and with it every service) stops when npm is stopped. `react-server`: see SERVER_TS_ARGS
+# in scripts/services/service.ts.
+exec setpriv --pdeathsig=TERM -- node --conditions=react-server --import ./node_modules/tsx/dist/loader.mjs "scripts/$cmd.ts" "$@"

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { CURRENT_SUBMITTED_G } from "../readings/queries";
 import type { ReadingPair } from "./rules";

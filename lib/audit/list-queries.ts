@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 
 // The audit page's query: events with who did them, filtered and paged, newest first, each with the

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { db } from "../db";
 import { assertLead } from "../submissions/policy";

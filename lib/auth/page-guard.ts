@@ -1,3 +1,4 @@
+import "server-only";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { hasAnyRole, isStaff, type Role } from "../users/rules";

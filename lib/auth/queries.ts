@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 
 export async function insertSignInAttempt(q: Db, a: { email: string; address: string; succeeded: boolean }): Promise<void> {

@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 import { getServerSession } from "next-auth";
 import { headers } from "next/headers";

@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 import { insertAuditEvent } from "../audit/queries";
 import { db } from "../db";

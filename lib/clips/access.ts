@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import type { Db } from "../db";
 import { AppError } from "../errors";

@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "../db";
 import { enqueue, type QueueKey } from "../jobs";
 import { findClip, finishStep, listSteps, startStep, updateClip, type ClipRow } from "./queries";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import type { TrimSource } from "./schema";
 import type { ProbeSummary } from "./verify-rules";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 
 // A clip's renditions: the stepping proxy (or why none was made), the poster and the filmstrip.

@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "../db";
 import { env } from "../env";
 import { getObjectStream, presignGet, sha256OfStream } from "../storage";

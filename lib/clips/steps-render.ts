@@ -1,3 +1,4 @@
+import "server-only";
 import { mkdtemp, rm } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { BEING_READ_STATES, type DropState, SETTLED_STATES } from "./states";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { AppError } from "../errors";
 import type { BelowMinimumRule, Criterion, EditionValues } from "./schema";

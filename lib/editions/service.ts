@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";
 import { db } from "../db";

@@ -1,3 +1,4 @@
+import "server-only";
 import { spawn } from "node:child_process";
 import { decodablePackets, fillFrameTimes, parseProbeLine, type RawPacket, type Rational, toDisplayOrder } from "./packet-order";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { decodePts, encodePts } from "./pts-codec";
 import type { IndexSummary, Rational } from "./summary";

@@ -1,3 +1,4 @@
+import "server-only";
 import { originalUrl } from "../clips/steps-inspect";
 import type { ClipRow } from "../clips/queries";
 import { isTransientToolError, PermanentStepError, type StepOutcome } from "../clips/step-errors";

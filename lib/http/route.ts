@@ -1,3 +1,4 @@
+import "server-only";
 import { UUID_PATTERN } from "../schema-parts";
 import { randomUUID } from "node:crypto";
 import type { z } from "zod";

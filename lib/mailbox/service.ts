@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { env } from "../env";
 import { AppError } from "../errors";

@@ -1,3 +1,4 @@
+import "server-only";
 import nodemailer from "nodemailer";
 import { db, type Db } from "../db";
 import { env } from "../env";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 
 // Who may get a reviewer digest on a given day.

@@ -1,3 +1,4 @@
+import "server-only";
 import { db } from "../db";
 import { env } from "../env";
 import { listQueueFor } from "../drops/queries";

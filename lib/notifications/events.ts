@@ -1,3 +1,4 @@
+import "server-only";
 import type { Knex } from "knex";
 import type { Db } from "../db";
 import { env } from "../env";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { insertOutbox, type Recipient } from "./queries";
 import { wantsMail } from "./rules";

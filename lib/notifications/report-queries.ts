@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 
 // Balls already reported to the manufacturer as below the limit during testing.

@@ -1,3 +1,4 @@
+import "server-only";
 import { isUniqueViolation, type Db } from "../db";
 import { AppError } from "../errors";
 

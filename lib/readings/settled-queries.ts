@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { SETTLED_STATES } from "../drops/states";
 import { CURRENT_SUBMITTED_G } from "./queries";

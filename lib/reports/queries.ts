@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { trimKept } from "../clips/trim-provenance";
 import { listSubmissionDrops } from "../readings/settled-queries";

@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { ballsCsv, dropsCsv } from "./csv";
 import { reportData } from "./data";

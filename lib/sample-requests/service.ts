@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { assertCanAcknowledge } from "./policy";
 import { recordChange } from "../audit/record";

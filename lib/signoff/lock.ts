@@ -1,3 +1,4 @@
+import "server-only";
 import { db, type Db } from "../db";
 import { AppError } from "../errors";
 import { findSubmission } from "../submissions/queries";

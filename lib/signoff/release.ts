@@ -1,3 +1,4 @@
+import "server-only";
 import type { Actor } from "../auth/actor";
 import { db, type Db } from "../db";
 import { visibleSubmission } from "../submissions/service";

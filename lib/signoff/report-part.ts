@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import { listRulingsOfSubmission } from "../rulings/queries";
 import { listReopenings, listSignatures, type SignatureRow } from "./queries";

@@ -1,3 +1,4 @@
+import "server-only";
 import { SIGNABLE_STATES } from "../drops/states";
 import type { Actor } from "../auth/actor";
 import { recordChange } from "../audit/record";

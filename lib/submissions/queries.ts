@@ -1,3 +1,4 @@
+import "server-only";
 import type { Db } from "../db";
 import type { SubmissionKind, SubmissionListQuery, SubmissionStatus, SubmissionValues } from "./schema";
 

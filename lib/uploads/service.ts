@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 import type { z } from "zod";
 import type { Actor } from "@/lib/auth/actor";

@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 import { hashPassword } from "../auth/password";
 import { recordChange } from "../audit/record";

@@ -1,3 +1,4 @@
+import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 
 /** A fresh invite token; only its hash is stored, so a database leak reveals no usable link. */

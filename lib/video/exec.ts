@@ -1,3 +1,4 @@
+import "server-only";
 import { spawn } from "node:child_process";
 
 export interface ExecResult {

@@ -1,3 +1,4 @@
+import "server-only";
 import { spawn } from "node:child_process";
 import { probeVideoSize } from "../frame-index/packets";
 import { decodeFrameCode, FRAME_CODE_BITS, frameCodeReadFilter, unwrapFrameCodes } from "./frame-code";

@@ -4,7 +4,7 @@ import path from "node:path";
 import { proxyArgs } from "../../lib/video/proxy";
 import { renderSyntheticClip } from "../clips/synth-clip";
 import { PROFILES } from "../profiles";
-import { projectRoot } from "../services/service";
+import { projectRoot, SERVER_TS_ARGS } from "../services/service";
 import { benchApi } from "./api";
 
 const arg = (name: string, fallback: string) => {
@@ -74,11 +74,10 @@ async function benchWorker() {
     console.log(`  rendered in ${((performance.now() - t) / 1000).toFixed(1)} s`);
   }
 
-  const loader = path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs");
   const ours = (step: "index" | "proxy") => {
     const r = spawnSync(
       process.execPath,
-      ["--import", loader, path.join(projectRoot, "scripts", "bench", "steps.ts"), step, clip, path.join(dir, "proxy-ours.mp4")],
+      [...SERVER_TS_ARGS, path.join(projectRoot, "scripts", "bench", "steps.ts"), step, clip, path.join(dir, "proxy-ours.mp4")],
       { encoding: "utf8", maxBuffer: 1 << 24 },
     );
     if (r.status !== 0) throw new Error(`the worker step failed: ${r.stderr}`);

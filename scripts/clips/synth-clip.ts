@@ -12,7 +12,7 @@ import { buildTruth, type Truth } from "./synth-truth";
 
 // Renders an invented ball surface with oil drops whose dispense and clear moments are known
 // exactly, burns a frame code into every frame, and writes the ground truth next to the clip.
-//   npx tsx scripts/clips/synth-clip.ts --out /tmp/clip.mp4 --size 1920x1080 --length 60
+//   npm run synth-clip -- --out /tmp/clip.mp4 --size 1920x1080 --length 60
 // Frame numbers in the truth are found again in the encoded file's own timestamps, so they hold
 // for whatever the container did to them (start offsets, B-frame delays, rounding).
 

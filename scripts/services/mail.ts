@@ -1,6 +1,5 @@
 import path from "node:path";
-import { pathToFileURL } from "node:url";
-import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, spawnLogged, stopChild, waitFor } from "./service";
+import { type Service, assertAlive, httpAnswers, logHasSince, logSize, projectRoot, SERVER_TS_ARGS, spawnLogged, stopChild, waitFor } from "./service";
 
 export interface MailFakeOptions {
   smtpPort: number;
@@ -14,7 +13,6 @@ export async function startMailFake(o: MailFakeOptions): Promise<Service & { smt
   // tsx's own CLI (node_modules/.bin/tsx -> tsx/dist/cli.mjs) runs the script in
   // a second node process and only relays signals to it; loading tsx as an
   // import hook keeps a single process, so the PID we stop is the server.
-  const loader = pathToFileURL(path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs")).href;
   const script = path.join(projectRoot, "scripts", "mail-fake.ts");
   const env: NodeJS.ProcessEnv = {
     ...process.env,
@@ -25,7 +23,7 @@ export async function startMailFake(o: MailFakeOptions): Promise<Service & { smt
   else delete env.MAIL_FAKE_STORE;
 
   const logStart = logSize(o.logFile);
-  const child = spawnLogged("mail-fake", process.execPath, ["--import", loader, script], { logFile: o.logFile, env });
+  const child = spawnLogged("mail-fake", process.execPath, [...SERVER_TS_ARGS, script], { logFile: o.logFile, env });
   const stop = () => stopChild(child);
   const apiUrl = `http://127.0.0.1:${o.httpPort}`;
   try {

@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import net from "node:net";
 import path from "node:path";
-import { fileURLToPath } from "node:url";
+import { fileURLToPath, pathToFileURL } from "node:url";
 
 export interface Service {
   name: string;
@@ -11,6 +11,15 @@ export interface Service {
 
 /** Repository root, so children find node_modules wherever the caller's cwd is. */
 export const projectRoot = fileURLToPath(new URL("../..", import.meta.url));
+
+// How a node process runs our TypeScript server code (worker, mail fake, bench steps): through tsx,
+// with the `react-server` condition so that `import "server-only"` resolves to its empty module,
+// as it does in Next's server bundles (in a browser bundle it is a build error).
+export const SERVER_TS_ARGS = [
+  "--conditions=react-server",
+  "--import",
+  pathToFileURL(path.join(projectRoot, "node_modules", "tsx", "dist", "loader.mjs")).href,
+];
 
 export interface SpawnLoggedOptions {
   logFile: string;
