@@ -1,4 +1,5 @@
 import { mean, sampleStandardDeviation } from "simple-statistics";
+import { digitsAgainst } from "../numbers";
 
 // Checks of a run's conditions against its edition's limits. Pure: the limits always come from
 // the specification edition, never from constants here.
@@ -50,20 +51,20 @@ export function conditionFlags(limits: ConditionLimits, c: ConditionInput): Cond
   } else if (hours < limits.minAcclimationH) {
     flags.push({
       code: "acclimation_short",
-      message: `Acclimated for ${hours.toFixed(1)} h before the test; the edition asks for at least ${limits.minAcclimationH} h.`,
+      message: `Acclimated for ${hours.toFixed(digitsAgainst(hours, [limits.minAcclimationH]))} h before the test; the edition asks for at least ${limits.minAcclimationH} h.`,
     });
   }
   if (c.surfaceTempC < limits.surfaceTempMinC || c.surfaceTempC > limits.surfaceTempMaxC) {
     flags.push({
       code: "surface_temp",
-      message: `Surface temperature ${c.surfaceTempC.toFixed(1)} °C is outside the edition's window of ${limits.surfaceTempMinC}–${limits.surfaceTempMaxC} °C.`,
+      message: `Surface temperature ${c.surfaceTempC.toFixed(digitsAgainst(c.surfaceTempC, [limits.surfaceTempMinC, limits.surfaceTempMaxC]))} °C is outside the edition's window of ${limits.surfaceTempMinC}–${limits.surfaceTempMaxC} °C.`,
     });
   }
   const r = roughnessSummary(c.roughnessRaUm);
   if (r.sd !== null && r.sd > limits.roughnessMaxSdUm) {
     flags.push({
       code: "roughness_spread",
-      message: `Roughness readings vary by SD ${r.sd.toFixed(3)} µm; the edition allows at most ${limits.roughnessMaxSdUm} µm.`,
+      message: `Roughness readings vary by SD ${r.sd.toFixed(digitsAgainst(r.sd, [limits.roughnessMaxSdUm], 3))} µm; the edition allows at most ${limits.roughnessMaxSdUm} µm.`,
     });
   }
   return flags;

@@ -26,6 +26,21 @@ describe("conditionFlags", () => {
     expect(conditionFlags(odd, { ...good, testedAt: new Date(hoursLater(16.25).getTime() - 1000) }).map((f) => f.code)).toEqual(["acclimation_short"]);
   });
 
+  it("writes a flagged value with the decimals that keep it on its side of the limit", () => {
+    // One second short of 24 h would round to "24.0 h", which reads as enough.
+    const [short] = conditionFlags(limits, { ...good, testedAt: new Date(hoursLater(24).getTime() - 1000) });
+    expect(short.message).toBe("Acclimated for 23.9997 h before the test; the edition asks for at least 24 h.");
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 24.04 })[0].message).toBe(
+      "Surface temperature 24.04 °C is outside the edition's window of 20–24 °C.",
+    );
+    expect(conditionFlags(limits, { ...good, surfaceTempC: 19.96 })[0].message).toBe(
+      "Surface temperature 19.96 °C is outside the edition's window of 20–24 °C.",
+    );
+    // Readings 0.3 and 0.4414: SD 0.10000… just over 0.1 (arithmetic: |0.1414| / √2).
+    const [spread] = conditionFlags(limits, { ...good, roughnessRaUm: [0.3, 0.44143] });
+    expect(spread.message).toMatch(/^Roughness readings vary by SD 0\.1000\d+ µm; the edition allows at most 0\.1 µm\.$/);
+  });
+
   it("flags a missing acclimation start", () => {
     expect(conditionFlags(limits, { ...good, acclimationStartedAt: null }).map((f) => f.code)).toEqual(["acclimation_missing"]);
   });
