@@ -37,3 +37,9 @@ export function formatBytes(n: number): string {
   }
   return `${v.toFixed(v < 10 ? 1 : 0)} ${units[i]}`;
 }
+
+/** Hours as "23 h 59 min", rounded down to the minute so a span never reads as reaching a limit it falls short of. */
+export function hoursAndMinutes(hours: number): string {
+  const minutes = Math.floor(hours * 60 + 1e-9);
+  return `${Math.floor(minutes / 60)} h ${minutes % 60} min`;
+}

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { hoursAndMinutes } from "@/lib/numbers";
 import { conditionFlags, roughnessSummary } from "@/lib/runs/conditions";
 
 // Limits as an edition would give them (values invented for the test).
@@ -79,5 +80,14 @@ describe("roughnessSummary", () => {
   it("has no SD for fewer than two readings", () => {
     expect(roughnessSummary([0.4])).toEqual({ n: 1, mean: 0.4, sd: null });
     expect(roughnessSummary([])).toEqual({ n: 0, mean: null, sd: null });
+  });
+});
+
+describe("hoursAndMinutes", () => {
+  it("rounds down to the minute, so one second short of 24 h never reads as 24 h", () => {
+    expect(hoursAndMinutes(24 - 1 / 3600)).toBe("23 h 59 min");
+    expect(hoursAndMinutes(24)).toBe("24 h 0 min");
+    expect(hoursAndMinutes(16.25)).toBe("16 h 15 min");
+    expect(hoursAndMinutes(0.1)).toBe("0 h 6 min");
   });
 });

@@ -2,6 +2,7 @@
 
 import { formatInstant } from "@/components/ui/dates";
 import { DetailList } from "@/components/ui/detail-list";
+import { hoursAndMinutes } from "@/lib/numbers";
 import type { RunView } from "@/lib/runs/view";
 import { formatTemperature } from "@/lib/units/rules";
 
@@ -16,7 +17,7 @@ export function RunConditions({ run }: { run: RunView }) {
     { label: "Surface temperature", value: formatTemperature(run.surfaceTempC) },
     {
       label: "Acclimation before the test",
-      value: run.acclimationH === null ? <span className="text-wick-700">not recorded</span> : `${run.acclimationH.toFixed(1)} h`,
+      value: run.acclimationH === null ? <span className="text-wick-700">not recorded</span> : hoursAndMinutes(run.acclimationH),
     },
     { label: "Preparation method", value: run.prepMethod },
     { label: "Abrasive", value: orNone(run.prepAbrasive) },
